@@ -1,0 +1,4 @@
+export * from './core/engine-error.js';
+export * from './core/method.js';
+export * from './core/units.js';
+export * from './registry.js';
