@@ -7,3 +7,8 @@ export * from './users/users.js';
 export * from './mail/mail.js';
 export * from './audit/audit.js';
 export * from './methods/evaluation.js';
+export * from './methods/stack-1d.js';
+export * from './methods/formula.js';
+export * from './methods/feature-boundary.js';
+export * from './methods/wall-thickness.js';
+export * from './methods/fastener.js';

@@ -2,9 +2,11 @@ import { fieldMessages, type EvaluationResult, type LengthUnit, type MethodSumma
 import { z } from 'zod';
 import { EngineError } from './core/engine-error.js';
 import type { EvaluationContext, MethodDefinition } from './core/method.js';
+import { featureBoundaryMethod } from './boundary/index.js';
 
 // Each concept folder exports its method definitions; add them here, one line per method.
 export const builtInMethods: readonly MethodDefinition[] = [
+  featureBoundaryMethod,
 ] as const;
 
 const byId = new Map(builtInMethods.map((method) => [method.id, method]));
