@@ -1,0 +1,1 @@
+export { everyNodeDocument, sampleBlockIds, sampleFileId } from './every-node-document.js';
