@@ -12,3 +12,4 @@ export * from './methods/formula.js';
 export * from './methods/feature-boundary.js';
 export * from './methods/wall-thickness.js';
 export * from './methods/fastener.js';
+export * from './methods/iso286.js';
