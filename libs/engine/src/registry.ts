@@ -3,11 +3,13 @@ import { z } from 'zod';
 import { EngineError } from './core/engine-error.js';
 import type { EvaluationContext, MethodDefinition } from './core/method.js';
 import { featureBoundaryMethod } from './boundary/index.js';
+import { wallThicknessMethod } from './wall/index.js';
 import { iso286FitMethod } from './iso286/index.js';
 
 // Each concept folder exports its method definitions; add them here, one line per method.
 export const builtInMethods: readonly MethodDefinition[] = [
   featureBoundaryMethod,
+  wallThicknessMethod,
   iso286FitMethod,
 ] as const;
 

@@ -19,7 +19,7 @@ export function bonusTable(modifier: ToleranceModifier, sizes: MaterialCondition
   return sizeSeries(from, to, unit).map((actualSize) => {
     const bonus = bonusTolerance(actualSize, modifier, sizes);
     return {
-      actualSize,
+      actualSize: roundLength(actualSize, unit),
       bonus: roundLength(bonus, unit),
       totalTolerance: roundLength(tolerance + bonus, unit),
     };
