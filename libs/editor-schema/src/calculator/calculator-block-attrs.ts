@@ -26,7 +26,7 @@ export const inputPathSchema = z
 
 export const methodIdSchema = z
   .string({ message: 'Method id is required' })
-  .min(1, 'Method id is required')
+  .min(1, { message: 'Method id is required', abort: true })
   .max(100, 'Method id is too long')
   .regex(/^[A-Za-z0-9][A-Za-z0-9._:/-]*$/, 'Method id may hold letters, digits and . _ : / - only');
 

@@ -37,6 +37,7 @@ declare module '@tiptap/core' {
 }
 
 const uniqueBlockIdsKey = new PluginKey('calculatorBlockUniqueIds');
+const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[1-8][0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/i;
 
 /**
  * The calculator block: an atom whose attributes say which method runs, with which
@@ -77,7 +78,7 @@ export const CalculatorBlock = Node.create({
   },
 
   parseHTML() {
-    return [{ tag: 'div[data-type="calculator-block"]' }];
+    return [{ tag: 'div[data-type="calculator-block"][data-method]' }];
   },
 
   renderHTML({ HTMLAttributes }) {
@@ -95,7 +96,7 @@ export const CalculatorBlock = Node.create({
 
   addProseMirrorPlugins() {
     const typeName = this.name;
-    // Copy and paste would otherwise duplicate a blockId, which the server refuses.
+    // Copy and paste would otherwise duplicate a blockId (or bring a malformed one), which the server refuses.
     return [
       new Plugin({
         key: uniqueBlockIdsKey,
@@ -105,8 +106,8 @@ export const CalculatorBlock = Node.create({
           const transaction = newState.tr;
           newState.doc.descendants((node, position) => {
             if (node.type.name !== typeName) return !node.isTextblock;
-            const blockId = node.attrs.blockId as string | null;
-            if (blockId && !seen.has(blockId)) {
+            const blockId = node.attrs.blockId as unknown;
+            if (typeof blockId === 'string' && uuidPattern.test(blockId) && !seen.has(blockId)) {
               seen.add(blockId);
             } else {
               const freshId = crypto.randomUUID();

@@ -42,10 +42,10 @@ function join(path: string, key: string | number): string {
   return path === '' ? String(key) : `${path}.${key}`;
 }
 
-// Bounded and iterative, so hostile nesting cannot overflow the stack of what follows.
+// Bounded and iterative, so hostile nesting (or a cycle) cannot overflow the stack of what
+// follows. Shared references are fine: editor JSON shares default attribute objects.
 function plainJsonError(json: unknown): string | null {
   const stack: [unknown, number][] = [[json, 0]];
-  const seen = new Set<object>();
   let values = 0;
   while (stack.length > 0) {
     const [value, depth] = stack.pop()!;
@@ -56,10 +56,7 @@ function plainJsonError(json: unknown): string | null {
       if (!Number.isFinite(value)) return 'Document holds a number that is not finite';
       continue;
     }
-    if (typeof value !== 'object' || (!Array.isArray(value) && !isPlainObject(value)) || seen.has(value)) {
-      return 'Document must be plain JSON data';
-    }
-    seen.add(value);
+    if (typeof value !== 'object' || (!Array.isArray(value) && !isPlainObject(value))) return 'Document must be plain JSON data';
     for (const child of Array.isArray(value) ? value : Object.values(value)) stack.push([child, depth + 1]);
   }
   const serialized = JSON.stringify(json);
