@@ -14,5 +14,7 @@ export default defineConfig({
     environment: 'jsdom',
     setupFiles: ['src/testing/setup.ts'],
     css: false,
+    // Two shared cores: typing into Mantine inputs under jsdom can take seconds.
+    testTimeout: 20_000,
   },
 });

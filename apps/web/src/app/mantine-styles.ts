@@ -1,0 +1,43 @@
+// Mantine's styles for only the components the app uses (a third of the full sheet).
+// Order matters: shared foundations first, then components that others build on.
+// Using a new Mantine component? Add its sheet here.
+import '@mantine/core/styles/baseline.css';
+import '@mantine/core/styles/default-css-variables.css';
+import '@mantine/core/styles/global.css';
+import '@mantine/core/styles/UnstyledButton.css';
+import '@mantine/core/styles/VisuallyHidden.css';
+import '@mantine/core/styles/Paper.css';
+import '@mantine/core/styles/Popover.css';
+import '@mantine/core/styles/CloseButton.css';
+import '@mantine/core/styles/Group.css';
+import '@mantine/core/styles/Stack.css';
+import '@mantine/core/styles/Center.css';
+import '@mantine/core/styles/Flex.css';
+import '@mantine/core/styles/Loader.css';
+import '@mantine/core/styles/Overlay.css';
+import '@mantine/core/styles/ModalBase.css';
+import '@mantine/core/styles/Input.css';
+import '@mantine/core/styles/InlineInput.css';
+import '@mantine/core/styles/ScrollArea.css';
+import '@mantine/core/styles/Combobox.css';
+import '@mantine/core/styles/Alert.css';
+import '@mantine/core/styles/Anchor.css';
+import '@mantine/core/styles/AppShell.css';
+import '@mantine/core/styles/Avatar.css';
+import '@mantine/core/styles/Badge.css';
+import '@mantine/core/styles/Burger.css';
+import '@mantine/core/styles/Button.css';
+import '@mantine/core/styles/Code.css';
+import '@mantine/core/styles/Menu.css';
+import '@mantine/core/styles/Modal.css';
+import '@mantine/core/styles/NavLink.css';
+import '@mantine/core/styles/Notification.css';
+import '@mantine/core/styles/Pagination.css';
+import '@mantine/core/styles/PasswordInput.css';
+import '@mantine/core/styles/SegmentedControl.css';
+import '@mantine/core/styles/Skeleton.css';
+import '@mantine/core/styles/Table.css';
+import '@mantine/core/styles/Text.css';
+import '@mantine/core/styles/Title.css';
+import '@mantine/core/styles/Tooltip.css';
+import '@mantine/notifications/styles.css';

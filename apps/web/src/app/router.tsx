@@ -1,0 +1,82 @@
+import { useMemo } from 'react';
+import { createBrowserRouter, redirect, RouterProvider, type RouteObject } from 'react-router-dom';
+import { RouteError } from '@/components/errors/route-error';
+import { PageLoader } from '@/components/layout/page-loader';
+import { paths } from '@/config/paths';
+
+// Every page is its own chunk: the first paint carries the shell, not the admin screens or,
+// later, the editor and KaTeX.
+export const routes: RouteObject[] = [
+  {
+    path: paths.auth.signIn.path,
+    lazy: () => import('./routes/auth/sign-in').then((m) => ({ Component: m.SignInRoute })),
+    ErrorBoundary: RouteError,
+    HydrateFallback: PageLoader,
+  },
+  {
+    path: paths.auth.forgotPassword.path,
+    lazy: () => import('./routes/auth/forgot-password').then((m) => ({ Component: m.ForgotPasswordRoute })),
+    ErrorBoundary: RouteError,
+    HydrateFallback: PageLoader,
+  },
+  {
+    path: paths.auth.resetPassword.path,
+    lazy: () => import('./routes/auth/reset-password').then((m) => ({ Component: m.ResetPasswordRoute })),
+    ErrorBoundary: RouteError,
+    HydrateFallback: PageLoader,
+  },
+  {
+    path: paths.auth.acceptInvite.path,
+    lazy: () => import('./routes/auth/accept-invite').then((m) => ({ Component: m.AcceptInviteRoute })),
+    ErrorBoundary: RouteError,
+    HydrateFallback: PageLoader,
+  },
+  {
+    path: paths.root.path,
+    lazy: () => import('./routes/app/root').then((m) => ({ Component: m.AppRoot })),
+    ErrorBoundary: RouteError,
+    HydrateFallback: PageLoader,
+    children: [
+      { index: true, loader: () => redirect(paths.library.home.getHref()) },
+      {
+        path: paths.library.home.path,
+        lazy: () => import('./routes/app/library').then((m) => ({ Component: m.LibraryRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.admin.root.path,
+        lazy: () => import('./routes/app/admin/root').then((m) => ({ Component: m.AdminRoot })),
+        ErrorBoundary: RouteError,
+        children: [
+          { index: true, loader: () => redirect(paths.admin.users.getHref()) },
+          {
+            path: paths.admin.users.path,
+            lazy: () => import('./routes/app/admin/users').then((m) => ({ Component: m.UsersRoute })),
+            ErrorBoundary: RouteError,
+          },
+          {
+            path: paths.admin.mail.path,
+            lazy: () => import('./routes/app/admin/mail').then((m) => ({ Component: m.MailRoute })),
+            ErrorBoundary: RouteError,
+          },
+          {
+            path: paths.admin.audit.path,
+            lazy: () => import('./routes/app/admin/audit').then((m) => ({ Component: m.AuditRoute })),
+            ErrorBoundary: RouteError,
+          },
+        ],
+      },
+    ],
+  },
+  {
+    path: '*',
+    lazy: () => import('./routes/not-found').then((m) => ({ Component: m.NotFoundRoute })),
+    ErrorBoundary: RouteError,
+    HydrateFallback: PageLoader,
+  },
+];
+
+export function AppRouter() {
+  const router = useMemo(() => createBrowserRouter(routes), []);
+  return <RouterProvider router={router} />;
+}

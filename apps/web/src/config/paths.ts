@@ -1,0 +1,38 @@
+/** Every route of the web app. Links and redirects go through `getHref`, never hand-written strings. */
+
+function withQuery(path: string, query: Record<string, string | undefined>): string {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) if (value) params.set(key, value);
+  const search = params.toString();
+  return search ? `${path}?${search}` : path;
+}
+
+export const paths = {
+  root: { path: '/', getHref: () => '/' },
+  auth: {
+    signIn: {
+      path: '/sign-in',
+      getHref: (next?: string, email?: string) => withQuery('/sign-in', { next, email }),
+    },
+    forgotPassword: { path: '/forgot-password', getHref: (email?: string) => withQuery('/forgot-password', { email }) },
+    // These two are also the targets of the links the server mails out.
+    resetPassword: { path: '/reset-password', getHref: (token?: string) => withQuery('/reset-password', { token }) },
+    acceptInvite: { path: '/accept-invite', getHref: (token?: string) => withQuery('/accept-invite', { token }) },
+  },
+  library: {
+    home: { path: '/library', getHref: (q?: string) => withQuery('/library', { q }) },
+  },
+  admin: {
+    root: { path: '/admin', getHref: () => '/admin' },
+    users: { path: '/admin/users', getHref: () => '/admin/users' },
+    mail: { path: '/admin/mail', getHref: (id?: string) => withQuery('/admin/mail', { id }) },
+    audit: { path: '/admin/audit', getHref: () => '/admin/audit' },
+  },
+} as const;
+
+/** Only same-app paths may be used as a post-sign-in destination (no `//host` or absolute URLs). */
+export function safeNextPath(next: string | null | undefined): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return paths.library.home.getHref();
+  if (next.startsWith(paths.auth.signIn.path)) return paths.library.home.getHref();
+  return next;
+}

@@ -1,0 +1,33 @@
+import '@testing-library/jest-dom/vitest';
+import { cleanup } from '@testing-library/react';
+import { afterEach } from 'vitest';
+
+// jsdom lacks these browser APIs that Mantine relies on.
+Object.defineProperty(window, 'matchMedia', {
+  writable: true,
+  value: (query: string) => ({
+    matches: false,
+    media: query,
+    onchange: null,
+    addListener: () => {},
+    removeListener: () => {},
+    addEventListener: () => {},
+    removeEventListener: () => {},
+    dispatchEvent: () => false,
+  }),
+});
+
+class ResizeObserverStub {
+  observe() {}
+  unobserve() {}
+  disconnect() {}
+}
+window.ResizeObserver = ResizeObserverStub as unknown as typeof ResizeObserver;
+
+Object.defineProperty(window, 'scrollTo', { writable: true, value: () => {} });
+Element.prototype.scrollIntoView = () => {};
+
+const { getComputedStyle } = window;
+window.getComputedStyle = (element: Element) => getComputedStyle(element);
+
+afterEach(() => cleanup());
