@@ -130,6 +130,7 @@ class DocumentWalker {
   }
 
   private checkAttributes(attrs: unknown, path: string, type: string, allowed: object, schema: ZodType | undefined): void {
+    if (attrs === undefined && Object.keys(allowed).length === 0) return;
     if (attrs !== undefined && !isPlainObject(attrs)) return this.fail(path, 'Attributes must be an object');
     let unknownFound = false;
     for (const name of Object.keys(attrs ?? {})) {
