@@ -34,25 +34,21 @@ function refineOneUnknown(inputs: Partial<Record<FastenerQuantity, number | null
 
 export const fastenerFloatingInputSchema = z
   .object({
-    holeSize: optionalLength('Hole size'),
-    fastenerSize: optionalLength('Fastener size'),
-    positionTolerance: optionalLength('Position tolerance'),
+    holeSize: optionalLength('Hole size').describe('H: MMC (smallest size) of the clearance hole; leave empty to solve for it'),
+    fastenerSize: optionalLength('Fastener size').describe('F: MMC (largest size) of the fastener; leave empty to solve for it'),
+    positionTolerance: optionalLength('Position tolerance').describe('T: position tolerance at MMC (a diameter) of each part; leave empty to solve for it'),
   })
   .superRefine(refineOneUnknown);
 export type FastenerFloatingInput = z.infer<typeof fastenerFloatingInputSchema>;
 
 export const fastenerFixedInputSchema = z
   .object({
-    holeSize: optionalLength('Hole size'),
-    fastenerSize: optionalLength('Fastener size'),
-    /** T1: position tolerance of the clearance holes. */
-    positionTolerance: optionalLength('Position tolerance'),
-    /** T2: position tolerance of the fixed (threaded or press-fit) part; empty means equal to T1. */
-    toleranceThreaded: optionalLength('Threaded part tolerance'),
-    /** P: projection of the fastener above the fixed part, used only where that part has no projected tolerance zone. */
-    projection: optionalLength('Projection'),
-    /** D: thread engagement depth or thickness of the fixed part, used with the projection. */
-    engagementDepth: optionalLength('Engagement depth'),
+    holeSize: optionalLength('Hole size').describe('H: MMC (smallest size) of the clearance hole; leave empty to solve for it'),
+    fastenerSize: optionalLength('Fastener size').describe('F: MMC (largest size) of the fastener; leave empty to solve for it'),
+    positionTolerance: optionalLength('Position tolerance').describe('T1: position tolerance at MMC of the clearance holes; leave empty to solve for it'),
+    toleranceThreaded: optionalLength('Threaded part tolerance').describe('T2: position tolerance at MMC of the fixed (threaded or press-fit) part; empty means equal to T1'),
+    projection: optionalLength('Projection').describe('P: maximum projection of the fastener above the fixed part; only where the fixed part has no projected tolerance zone'),
+    engagementDepth: optionalLength('Engagement depth').describe('D: minimum thread engagement or thickness of the fixed part; given together with the projection'),
   })
   .superRefine((inputs, ctx) => {
     refineOneUnknown(inputs, ctx);

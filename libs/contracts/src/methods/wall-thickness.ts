@@ -44,10 +44,13 @@ const datumFeatureSchema = z
 export const wallThicknessInputSchema = z
   .object({
     arrangement: wallArrangementSchema,
-    basicDistance: z.number({ message: 'Basic distance must be a number' }).nullish(),
-    feature: locatedFeatureSchema,
-    datum: datumFeatureSchema,
-    positionTolerance: toleranceSchema('Position tolerance'),
+    basicDistance: z
+      .number({ message: 'Basic distance must be a number' })
+      .nullish()
+      .describe('Side by side only: basic distance from the datum feature axis (or datum plane) to the located feature axis'),
+    feature: locatedFeatureSchema.describe('The located feature of size'),
+    datum: datumFeatureSchema.describe('The datum feature it is located to: a feature of size, or a plane (side by side only)'),
+    positionTolerance: toleranceSchema('Position tolerance').describe('Position tolerance of the located feature, a diameter'),
     toleranceModifier: toleranceModifierSchema,
     /** Required for a datum feature of size; a plane datum takes RMB or nothing. */
     datumModifier: datumModifierSchema.nullish(),
