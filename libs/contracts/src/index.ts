@@ -13,3 +13,4 @@ export * from './methods/feature-boundary.js';
 export * from './methods/wall-thickness.js';
 export * from './methods/fastener.js';
 export * from './methods/iso286.js';
+export * from './methods/iso2768.js';

@@ -6,6 +6,7 @@ import { featureBoundaryMethod } from './boundary/index.js';
 import { wallThicknessMethod } from './wall/index.js';
 import { fastenerFixedMethod, fastenerFloatingMethod } from './fastener/index.js';
 import { iso286FitMethod } from './iso286/index.js';
+import { iso2768AngularMethod, iso2768GeometricMethod, iso2768Method } from './iso2768/index.js';
 import { formulaMethod } from './formula/index.js';
 import { stack1dMethod } from './stack/index.js';
 
@@ -16,6 +17,9 @@ export const builtInMethods: readonly MethodDefinition[] = [
   fastenerFloatingMethod,
   fastenerFixedMethod,
   iso286FitMethod,
+  iso2768Method,
+  iso2768AngularMethod,
+  iso2768GeometricMethod,
   stack1dMethod,
   formulaMethod,
 ] as const;
