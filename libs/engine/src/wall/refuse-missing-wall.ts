@@ -13,7 +13,8 @@ export function refuseMissingWall(model: WallModel, thinnest: WallAtSizes, unit:
   const wallWithoutOffset = thinnest.thinnest + thinnest.offsetAllowance;
   if (geometry.kind === 'between') {
     const needed = geometry.basicDistance - thinnest.thinnest;
-    throw EngineError.invalid({ basicDistance: `At worst case the features touch or overlap (${where}): the basic distance must exceed ${show(needed)}` });
+    const what = geometry.datumIsPlane ? 'the hole breaks out through the datum face' : 'the features touch or overlap';
+    throw EngineError.invalid({ basicDistance: `At worst case ${what} (${where}): the basic distance must exceed ${show(needed)}` });
   }
   if (geometry.basicDistance > 0) {
     const limit = geometry.basicDistance + thinnest.thinnest;

@@ -230,6 +230,11 @@ describe('wall-thickness method: refused inputs', () => {
     expect(fields['inputs.basicDistance']).toMatch(/touch or overlap .* the basic distance must exceed 9\.4 mm$/);
   });
 
+  it('refuses a hole that breaks out through a plane datum face at worst case', () => {
+    // 10.2/2 + (0.3 + 0.2)/2 = 5.35 needed; at 5.3 the hole breaks out at LMC size (reference.md §5 plane example, MMC).
+    expect(fieldsOf({ ...holeNearEdge('MMC'), basicDistance: 5.3 })['inputs.basicDistance']).toMatch(/breaks out through the datum face .* must exceed 5\.35 mm$/);
+  });
+
   it('refuses MMB or LMB on a plane datum, and limits given to a plane', () => {
     expect(fieldsOf({ ...holeNearEdge('LMC'), datumModifier: 'LMB' })).toEqual({
       'inputs.datumModifier': 'A plane datum has no size, so MMB or LMB cannot apply: use RMB or leave it empty',
@@ -307,7 +312,7 @@ const microns = (min: number, max: number) => fc.integer({ min, max }).map((valu
 const configArbitrary = (modifiers?: { tolerance: WallInputs['toleranceModifier']; datum: WallInputs['datumModifier'] }) =>
   fc
     .record({
-      layout: fc.constantFrom('bore-in-boss', 'boss-around-bore', 'holes-side-by-side', 'hole-in-boss-off-centre', 'hole-near-plane'),
+      layout: fc.constantFrom('bore-in-boss', 'boss-around-bore', 'holes-side-by-side', 'hole-in-boss-off-centre', 'boss-around-bore-off-centre', 'hole-near-plane'),
       innerLower: microns(1000, 60_000),
       featureSizeTol: microns(0, 500),
       datumSizeTol: microns(0, 500),
@@ -345,6 +350,11 @@ const configArbitrary = (modifiers?: { tolerance: WallInputs['toleranceModifier'
         case 'hole-in-boss-off-centre': {
           const feature = limits('internal', draw.innerLower, draw.featureSizeTol);
           const datum = limits('external', feature.upperLimit + 2 * draw.offCentre + allowance + draw.margin, draw.datumSizeTol);
+          return { ...common, arrangement: 'side-by-side', basicDistance: draw.offCentre, feature, datum };
+        }
+        case 'boss-around-bore-off-centre': {
+          const datum = limits('internal', draw.innerLower, draw.datumSizeTol);
+          const feature = limits('external', datum.upperLimit + 2 * draw.offCentre + allowance + draw.margin, draw.featureSizeTol);
           return { ...common, arrangement: 'side-by-side', basicDistance: draw.offCentre, feature, datum };
         }
         case 'hole-near-plane': {
