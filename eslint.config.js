@@ -22,7 +22,7 @@ export default tseslint.config(
   {
     files: ['libs/contracts/src/**/*.ts'],
     rules: {
-      'no-restricted-imports': ['error', { patterns: [{ group: ['*', '!zod', '!./*', '!../*'], message: 'libs/contracts depends on zod only.' }] }],
+      'no-restricted-imports': ['error', { patterns: [{ regex: '^(?!zod$|\\.{1,2}/)', message: 'libs/contracts depends on zod only.' }] }],
     },
   },
   {
@@ -30,6 +30,13 @@ export default tseslint.config(
     ignores: ['libs/engine/src/**/*.spec.ts', 'libs/engine/src/**/*.bench.ts'],
     rules: {
       'no-restricted-imports': ['error', { patterns: [{ group: frameworkImports, message: 'libs/engine is pure: no framework, database or Node I/O imports.' }] }],
+    },
+  },
+  {
+    files: ['libs/editor-schema/src/**/*.ts'],
+    ignores: ['libs/editor-schema/src/**/*.spec.ts'],
+    rules: {
+      'no-restricted-imports': ['error', { patterns: [{ group: ['@nestjs/*', 'react', 'react-dom', '@tiptap/react', 'drizzle-orm', 'drizzle-orm/*', 'node:*'], message: 'libs/editor-schema is view-less and server-safe: no React, NestJS, database or Node I/O imports.' }] }],
     },
   },
   {
