@@ -31,7 +31,11 @@ export function MailInbox() {
       <Paper className={classes.listPane}>
         <Group justify="space-between" px="md" py="xs" className={classes.listHeader}>
           <Text size="sm" c="dimmed">
-            {mails.data.total === 1 ? '1 message' : `${mails.data.total} messages`}
+            {items.length < mails.data.total
+              ? `Newest ${items.length} of ${mails.data.total} messages`
+              : mails.data.total === 1
+                ? '1 message'
+                : `${mails.data.total} messages`}
           </Text>
           <Button variant="subtle" size="compact-sm" leftSection={<IconRefresh size={14} />} loading={mails.isFetching} onClick={() => void mails.refetch()}>
             Refresh

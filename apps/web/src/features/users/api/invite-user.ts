@@ -1,10 +1,10 @@
-import type { InviteUserRequest } from '@limitbook/contracts';
+import { userSchema, type InviteUserRequest, type User } from '@limitbook/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { getUsersQueryOptions } from './get-users';
 
-export function inviteUser(body: InviteUserRequest): Promise<void> {
-  return api.send('/api/users/invitations', { method: 'POST', body });
+export function inviteUser(body: InviteUserRequest): Promise<User> {
+  return api.post('/api/users/invitations', body, userSchema);
 }
 
 export function useInviteUser() {

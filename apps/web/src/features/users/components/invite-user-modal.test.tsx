@@ -25,7 +25,9 @@ describe('InviteUserModal', () => {
 
   it('sends the invitation with the chosen role and closes', async () => {
     session.signIn({ accessToken: 'admin-token', expiresIn: 900, user: { id: 'a', email: 'maren.holt@brackwater.example', name: 'Maren Holt', role: 'admin' } });
-    const fetch = vi.fn(async () => jsonResponse(201, { id: 'n1' }));
+    const fetch = vi.fn(async () =>
+      jsonResponse(201, { id: 'n1', email: 'ines.varga@brackwater.example', name: 'Ines Varga', role: 'author', status: 'invited', createdAt: '2026-01-05T09:00:00.000Z', lastSignInAt: null }),
+    );
     vi.stubGlobal('fetch', fetch);
     const onClose = vi.fn();
     const { user } = render(<InviteUserModal opened onClose={onClose} />);

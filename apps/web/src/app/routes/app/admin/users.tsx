@@ -1,4 +1,4 @@
-import { Button, Paper, Skeleton, Stack } from '@mantine/core';
+import { Button, Paper, Skeleton, Stack, Text } from '@mantine/core';
 import { useDisclosure, useDocumentTitle } from '@mantine/hooks';
 import { IconUserPlus } from '@tabler/icons-react';
 import { PanelError } from '@/components/errors/panel-error';
@@ -35,9 +35,18 @@ export function UsersRoute() {
       ) : users.isError ? (
         <PanelError error={users.error} onRetry={() => void users.refetch()} title="Users could not be loaded" />
       ) : (
-        <Paper style={{ overflow: 'hidden' }}>
-          <UsersTable users={users.data.items} currentUserId={me.id} />
-        </Paper>
+        <>
+          <Paper style={{ overflow: 'hidden' }}>
+            <UsersTable users={users.data.items} currentUserId={me.id} />
+          </Paper>
+          <Text size="sm" c="dimmed" mt="sm">
+            {users.data.items.length < users.data.total
+              ? `Showing ${users.data.items.length} of ${users.data.total} people.`
+              : users.data.total === 1
+                ? '1 person'
+                : `${users.data.total} people`}
+          </Text>
+        </>
       )}
       <InviteUserModal opened={inviting} onClose={invite.close} />
     </>
