@@ -1,0 +1,1 @@
+export { markdownToDocument, MarkdownConversionError, type MarkdownToDocumentOptions } from './markdown-to-document.js';
