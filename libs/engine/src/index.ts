@@ -2,3 +2,5 @@ export * from './core/engine-error.js';
 export * from './core/method.js';
 export * from './core/units.js';
 export * from './registry.js';
+export * from './stack/index.js';
+export * from './formula/index.js';

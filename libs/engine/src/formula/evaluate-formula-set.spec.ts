@@ -102,6 +102,12 @@ describe('evaluateFormulaSet', () => {
     expect(result.results.area!.value).toBeCloseTo(78.5398163397, 9);
   });
 
+  it('evaluates a long ordinary sum (a deep tree) within the limits', () => {
+    // 1 + 2 + … + 150 = 150 × 151 / 2 = 11 325.
+    const sum = Array.from({ length: 150 }, (_, index) => index + 1).join('+');
+    expect(evaluateFormulaSet({ inputs: {}, expressions: [`total = ${sum}`] }).results.total!.value).toBe(11_325);
+  });
+
   it('refuses more expressions than the limit with LIMIT_EXCEEDED', () => {
     const error = refusal({ inputs: {}, expressions: Array.from({ length: 101 }, (_, index) => `a${index} = ${index}`) });
     expect(error.code).toBe('LIMIT_EXCEEDED');

@@ -24,8 +24,10 @@ export interface FormulaSetLimits {
   maxExpressionLength: number;
   /** Parsed nodes per expression; bounds evaluation work, since nothing loops. */
   maxNodes: number;
-  /** Nesting of brackets and of the parsed tree; bounds the parser's and evaluator's recursion. */
-  maxDepth: number;
+  /** Nesting of brackets, checked before parsing; bounds the parser's recursion. */
+  maxBracketDepth: number;
+  /** Depth of the parsed tree (a long sum is a deep tree); bounds the evaluator's recursion. */
+  maxTreeDepth: number;
 }
 
 export const defaultFormulaSetLimits: FormulaSetLimits = {
@@ -34,7 +36,8 @@ export const defaultFormulaSetLimits: FormulaSetLimits = {
   maxValues: formulaLimits.maxValues,
   maxExpressionLength: formulaLimits.maxExpressionLength,
   maxNodes: 400,
-  maxDepth: 40,
+  maxBracketDepth: 40,
+  maxTreeDepth: 250,
 };
 
 export interface FormulaCheckResult {
@@ -150,8 +153,8 @@ export function evaluateFormulaSet(definition: FormulaSetDefinition, limits: For
 
   function runExpression(text: string, position: number, field: string): { node: MathNode; value: FormulaValue; references: Set<string> } | undefined {
     const depth = bracketDepth(text);
-    if (depth > limits.maxDepth) {
-      problems.add(field, { kind: 'refused', message: `Refused: brackets nest deeper than ${limits.maxDepth} levels` });
+    if (depth > limits.maxBracketDepth) {
+      problems.add(field, { kind: 'refused', message: `Refused: brackets nest deeper than ${limits.maxBracketDepth} levels` });
       return undefined;
     }
     let node: MathNode;

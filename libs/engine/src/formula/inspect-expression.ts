@@ -19,7 +19,7 @@ export interface InspectionScope {
 
 export interface InspectionLimits {
   maxNodes: number;
-  maxDepth: number;
+  maxTreeDepth: number;
 }
 
 /**
@@ -37,7 +37,7 @@ export function inspectExpression(root: MathNode, scope: InspectionScope, limits
   const visit = (node: MathNode, depth: number): ExpressionProblem | undefined => {
     nodes += 1;
     if (nodes > limits.maxNodes) return refused(`it has more than ${limits.maxNodes} terms`);
-    if (depth > limits.maxDepth) return refused(`it nests deeper than ${limits.maxDepth} levels`);
+    if (depth > limits.maxTreeDepth) return refused(`it nests deeper than ${limits.maxTreeDepth} levels`);
     const children = (list: readonly MathNode[]) => {
       for (const child of list) {
         const problem = visit(child, depth + 1);
