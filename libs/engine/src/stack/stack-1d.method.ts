@@ -11,6 +11,7 @@
  * server can run the whole evaluation in a worker thread. For finer control the pieces are
  * exported: `planStack(inputs)` gives plain data to post to a worker, `runMonteCarlo(plan, trials,
  * seed)` samples there, and `analyseStack(inputs, unit, summary)` finishes with the same result.
+ * `context.random` is not used: the seed is an input, so a saved record reproduces its result.
  */
 import { stack1dInputSchema } from '@limitbook/contracts';
 import { defineMethod } from '../core/method.js';
