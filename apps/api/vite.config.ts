@@ -13,6 +13,8 @@ export default defineConfig({
     rollupOptions: {
       input: {
         main: 'src/main.ts',
+        // Beside main.js so the evaluation pool finds it (see modules/methods/evaluation-pool.ts).
+        'evaluation.worker': 'src/modules/methods/evaluation.worker.ts',
       },
       output: { entryFileNames: '[name].js', format: 'es' },
     },
@@ -20,6 +22,7 @@ export default defineConfig({
   ssr: { noExternal: [/^@limitbook\//] },
   test: {
     include: ['src/**/*.spec.ts'],
+    globalSetup: ['src/testing/global-setup.ts'],
     environment: 'node',
     hookTimeout: 60_000,
     testTimeout: 30_000,

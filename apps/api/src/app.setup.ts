@@ -1,0 +1,38 @@
+import { type NextFunction, type Request, type Response } from 'express';
+import { type NestExpressApplication } from '@nestjs/platform-express';
+import { NestFactory } from '@nestjs/core';
+import cookieParser from 'cookie-parser';
+import swaggerUiDist from 'swagger-ui-dist';
+import { AppModule, type AppOptions } from './app.module.js';
+import { toErrorBody } from './common/errors/error-body.js';
+import { GLOBAL_PREFIX } from './common/openapi/route-catalog.js';
+import { SWAGGER_ASSETS_PATH } from './modules/docs/docs.controller.js';
+
+export const JSON_BODY_LIMIT = '1mb';
+
+/**
+ * Everything main and the tests share. The app must be created with `bodyParser: false`:
+ * the JSON parser is registered here with our size limit and our error shape.
+ */
+export function configureApp(app: NestExpressApplication): NestExpressApplication {
+  app.setGlobalPrefix(GLOBAL_PREFIX);
+  app.disable('x-powered-by');
+  app.use(cookieParser());
+  app.useBodyParser('json', { limit: JSON_BODY_LIMIT });
+  // Body-parser errors happen before Nest's filters see the request.
+  app.use((error: unknown, _req: Request, res: Response, next: NextFunction) => {
+    if (res.headersSent) return next(error);
+    const body = toErrorBody(error);
+    res.status(body.statusCode).json(body);
+  });
+  app.useStaticAssets(swaggerUiDist.getAbsoluteFSPath(), { prefix: SWAGGER_ASSETS_PATH, index: false });
+  return app;
+}
+
+export async function createApp(options: AppOptions, logger?: false | ('log' | 'error' | 'warn' | 'debug' | 'verbose' | 'fatal')[]): Promise<NestExpressApplication> {
+  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(options), {
+    bodyParser: false,
+    ...(logger !== undefined ? { logger } : {}),
+  });
+  return configureApp(app);
+}

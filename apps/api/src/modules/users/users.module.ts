@@ -1,0 +1,14 @@
+import { Module } from '@nestjs/common';
+import { AuditModule } from '../audit/audit.module.js';
+import { AuthModule } from '../auth/auth.module.js';
+import { UsersController } from './users.controller.js';
+import { UsersRepository } from './users.repository.js';
+import { BootstrapAdminSeed, DemoPeopleSeed } from './users.seed.js';
+import { UsersService } from './users.service.js';
+
+@Module({
+  imports: [AuthModule, AuditModule],
+  controllers: [UsersController],
+  providers: [UsersService, UsersRepository, BootstrapAdminSeed, DemoPeopleSeed],
+})
+export class UsersModule {}
