@@ -1,4 +1,4 @@
-import { type GeneralToleranceRow, type GeneralToleranceTable } from './data/general-tolerance-tables.js';
+import { type GeneralToleranceRow, type GeneralToleranceTable } from './tables/general-tolerance-tables.js';
 
 /** The row of an ISO 2768 table holding `lengthMm` ("over a up to and including b"); undefined outside it. */
 export function findGeneralToleranceRow<TClass extends string>(

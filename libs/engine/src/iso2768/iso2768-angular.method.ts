@@ -1,7 +1,7 @@
 import { iso2768AngularInputSchema, type Iso2768LinearClass } from '@limitbook/contracts';
 import { defineMethod } from '../core/method.js';
 import { formatNumber } from '../core/units.js';
-import { angularDeviations } from './data/general-tolerance-tables.js';
+import { angularDeviations } from './tables/general-tolerance-tables.js';
 import { findGeneralToleranceRow, rowRangeText } from './find-general-tolerance-row.js';
 import { lengthInMm, rangeInUnit } from './length-from-micrometres.js';
 import { resolveToleranceClass } from './resolve-tolerance-class.js';

@@ -8,7 +8,7 @@ import {
   straightnessFlatnessTolerances,
   symmetryTolerances,
   type GeneralToleranceTable,
-} from './data/general-tolerance-tables.js';
+} from './tables/general-tolerance-tables.js';
 import { findGeneralToleranceRow, rowRangeText } from './find-general-tolerance-row.js';
 import { lengthFromMicrometres, lengthInMm, rangeInUnit } from './length-from-micrometres.js';
 import { resolveToleranceClass } from './resolve-tolerance-class.js';

@@ -2,7 +2,7 @@ import { iso2768InputSchema, type Iso2768LinearClass } from '@limitbook/contract
 import { EngineError } from '../core/engine-error.js';
 import { defineMethod } from '../core/method.js';
 import { formatNumber } from '../core/units.js';
-import { linearDeviations, radiusChamferDeviations } from './data/general-tolerance-tables.js';
+import { linearDeviations, radiusChamferDeviations } from './tables/general-tolerance-tables.js';
 import { findGeneralToleranceRow, rowRangeText } from './find-general-tolerance-row.js';
 import { lengthFromMicrometres, lengthInMm, rangeInUnit } from './length-from-micrometres.js';
 import { resolveToleranceClass } from './resolve-tolerance-class.js';

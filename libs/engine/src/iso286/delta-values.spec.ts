@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { deltaGrades, deltaRows } from './data/delta-values.js';
-import { type gradeNames } from './data/standard-tolerance-grades.js';
+import { deltaGrades, deltaRows } from './tables/delta-values.js';
+import { type gradeNames } from './tables/standard-tolerance-grades.js';
 import { standardTolerance } from './standard-tolerance.js';
 
 describe('Δ table (ISO 286-1 Table 3)', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { intermediateStepUpperBounds, mainStepUpperBounds } from './data/size-steps.js';
+import { intermediateStepUpperBounds, mainStepUpperBounds } from './tables/size-steps.js';
 import { findSizeStep } from './find-size-step.js';
 
 describe('findSizeStep', () => {

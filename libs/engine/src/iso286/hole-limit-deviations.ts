@@ -1,6 +1,6 @@
-import { deltaGrades, deltaRows } from './data/delta-values.js';
-import { jHoleGrades, jHoleUpperDeviationRows } from './data/j-deviations.js';
-import { lowerDeviationLetters, shaftLowerDeviationRows, shaftUpperDeviationRows, upperDeviationLetters } from './data/shaft-fundamental-deviations.js';
+import { deltaGrades, deltaRows } from './tables/delta-values.js';
+import { jHoleGrades, jHoleUpperDeviationRows } from './tables/j-deviations.js';
+import { lowerDeviationLetters, shaftLowerDeviationRows, shaftUpperDeviationRows, upperDeviationLetters } from './tables/shaft-fundamental-deviations.js';
 import { checkCommonRules } from './check-common-rules.js';
 import { type SizeStep } from './find-size-step.js';
 import { type FundamentalDeviationSource, type LimitDeviationsResult } from './limit-deviations.js';

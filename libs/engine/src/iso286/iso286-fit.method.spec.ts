@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { EngineError } from '../core/engine-error.js';
 import { evaluateMethod, findMethod } from '../registry.js';
-import { gradeNames } from './data/standard-tolerance-grades.js';
+import { gradeNames } from './tables/standard-tolerance-grades.js';
 import { holeLetters, shaftLetters } from './parse-tolerance-class.js';
 import { iso286FitMethod, type Iso286FitOutputs } from './iso286-fit.method.js';
 

@@ -2,7 +2,7 @@ import { iso286FitInputSchema, type DerivationStep, type LengthUnit } from '@lim
 import { EngineError } from '../core/engine-error.js';
 import { defineMethod } from '../core/method.js';
 import { formatNumber, MM_PER_INCH, roundTo, toMm } from '../core/units.js';
-import { largestNominalSizeMm, mainStepUpperBounds } from './data/size-steps.js';
+import { largestNominalSizeMm, mainStepUpperBounds } from './tables/size-steps.js';
 import { classifyFit, type FitType } from './classify-fit.js';
 import { findSizeStep, type SizeStep } from './find-size-step.js';
 import { holeLimitDeviations } from './hole-limit-deviations.js';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { shaftLowerDeviationRows, shaftUpperDeviationRows } from './data/shaft-fundamental-deviations.js';
+import { shaftLowerDeviationRows, shaftUpperDeviationRows } from './tables/shaft-fundamental-deviations.js';
 import { definedSpanText, lookupDeviationCell } from './lookup-deviation-cell.js';
 
 describe('lookupDeviationCell', () => {

@@ -1,4 +1,4 @@
-import { mainStepUpperBounds } from './data/size-steps.js';
+import { mainStepUpperBounds } from './tables/size-steps.js';
 import { findSizeStep, type SizeStep } from './find-size-step.js';
 
 export type DeviationRows = readonly (readonly [number, ...(number | null)[]])[];

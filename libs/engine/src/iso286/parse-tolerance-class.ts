@@ -1,4 +1,4 @@
-import { gradeNames, type GradeName } from './data/standard-tolerance-grades.js';
+import { gradeNames, type GradeName } from './tables/standard-tolerance-grades.js';
 import { type FeatureSide, type ToleranceClass } from './tolerance-class.js';
 
 /** The fundamental deviations of ISO 286-1 (letters I, L, O, Q and W are never used). */

@@ -1,11 +1,11 @@
-import { jShaftGrades, jShaftLowerDeviationRows } from './data/j-deviations.js';
-import { mainStepUpperBounds } from './data/size-steps.js';
+import { jShaftGrades, jShaftLowerDeviationRows } from './tables/j-deviations.js';
+import { mainStepUpperBounds } from './tables/size-steps.js';
 import {
   lowerDeviationLetters,
   shaftLowerDeviationRows,
   shaftUpperDeviationRows,
   upperDeviationLetters,
-} from './data/shaft-fundamental-deviations.js';
+} from './tables/shaft-fundamental-deviations.js';
 import { checkCommonRules } from './check-common-rules.js';
 import { findSizeStep } from './find-size-step.js';
 import { type LimitDeviationsResult } from './limit-deviations.js';

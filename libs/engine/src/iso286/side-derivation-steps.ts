@@ -1,5 +1,5 @@
 import { type DerivationStep } from '@limitbook/contracts';
-import { gradeNames } from './data/standard-tolerance-grades.js';
+import { gradeNames } from './tables/standard-tolerance-grades.js';
 import { type LimitDeviations } from './limit-deviations.js';
 import { micrometresLatex, micrometresText, signedMicrometresText } from './micrometre-hundredths.js';
 import { standardTolerance } from './standard-tolerance.js';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { gradeNames, standardToleranceRows, type GradeName } from './data/standard-tolerance-grades.js';
+import { gradeNames, standardToleranceRows, type GradeName } from './tables/standard-tolerance-grades.js';
 import { standardTolerance } from './standard-tolerance.js';
 
 const it286 = (grade: GradeName, size: number) => {

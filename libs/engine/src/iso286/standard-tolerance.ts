@@ -1,5 +1,5 @@
-import { mainStepUpperBounds } from './data/size-steps.js';
-import { gradeNames, standardToleranceRows, type GradeName } from './data/standard-tolerance-grades.js';
+import { mainStepUpperBounds } from './tables/size-steps.js';
+import { gradeNames, standardToleranceRows, type GradeName } from './tables/standard-tolerance-grades.js';
 import { findSizeStep, type SizeStep } from './find-size-step.js';
 import { hundredthsFromMicrometres, type MicrometreHundredths } from './micrometre-hundredths.js';
 

@@ -1,4 +1,4 @@
-import { type GradeName } from './data/standard-tolerance-grades.js';
+import { type GradeName } from './tables/standard-tolerance-grades.js';
 
 export type FeatureSide = 'hole' | 'shaft';
 
