@@ -53,7 +53,10 @@ export const theme = createTheme({
     Paper: { defaultProps: { withBorder: true, radius: 'sm' } },
     Card: { defaultProps: { withBorder: true, radius: 'sm' } },
     Badge: { defaultProps: { radius: 'xs', variant: 'light' } },
-    Modal: { defaultProps: { radius: 'sm', overlayProps: { backgroundOpacity: 0.45, blur: 1 } } },
+    Modal: {
+      defaultProps: { radius: 'sm', overlayProps: { backgroundOpacity: 0.45, blur: 1 } },
+      styles: { title: { fontFamily: 'Merriweather, Georgia, serif', fontWeight: 700, fontSize: '1.125rem' } },
+    },
     TextInput: { defaultProps: { radius: 'sm' } },
     PasswordInput: { defaultProps: { radius: 'sm' } },
     Tooltip: { defaultProps: { withArrow: true, openDelay: 250 } },

@@ -34,6 +34,7 @@ import '@mantine/core/styles/NavLink.css';
 import '@mantine/core/styles/Notification.css';
 import '@mantine/core/styles/Pagination.css';
 import '@mantine/core/styles/PasswordInput.css';
+import '@mantine/core/styles/FloatingIndicator.css';
 import '@mantine/core/styles/SegmentedControl.css';
 import '@mantine/core/styles/Skeleton.css';
 import '@mantine/core/styles/Table.css';

@@ -9,8 +9,8 @@ export function LogoMark({ size = 28, tone = 'ink' }: { size?: number; tone?: 'i
     <svg width={size} height={size} viewBox="0 0 32 32" aria-hidden="true" focusable="false" className={classes.mark}>
       <rect x="1" y="1" width="30" height="30" rx="5" fill={plate} />
       <path d="M7 8.5h18M7 23.5h18" stroke={line} strokeWidth="2.2" strokeLinecap="round" />
-      <path d="M16 11.6v8.8" stroke="#e17050" strokeWidth="1.8" />
-      <path d="M13.2 14.3 16 11.2l2.8 3.1M13.2 17.7 16 20.8l2.8-3.1" fill="none" stroke="#e17050" strokeWidth="1.8" strokeLinejoin="round" strokeLinecap="round" />
+      <path d="M16 11.6v8.8" stroke="#e17050" strokeWidth="2.2" />
+      <path d="M13.2 14.3 16 11.2l2.8 3.1M13.2 17.7 16 20.8l2.8-3.1" fill="none" stroke="#e17050" strokeWidth="2.2" strokeLinejoin="round" strokeLinecap="round" />
     </svg>
   );
 }

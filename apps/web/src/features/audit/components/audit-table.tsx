@@ -1,4 +1,5 @@
-import { Badge, Code, Table, Text } from '@mantine/core';
+import { Badge, Code, Group, Stack, Table, Text } from '@mantine/core';
+import { useMediaQuery } from '@mantine/hooks';
 import type { AuditEvent } from '@limitbook/contracts';
 import { formatDateTime } from '@/lib/format';
 import classes from './audit.module.css';
@@ -9,9 +10,63 @@ function detailText(detail: Record<string, unknown>): string {
     .join(' · ');
 }
 
-export function AuditTable({ events }: { events: AuditEvent[] }) {
+function Subject({ event }: { event: AuditEvent }) {
+  const detail = detailText(event.detail);
   return (
-    <Table.ScrollContainer minWidth={820}>
+    <>
+      <Text size="sm">
+        {event.subjectType}
+        {event.subjectId && (
+          <Code ml={6} className={classes.id} title={event.subjectId}>
+            {event.subjectId.slice(0, 8)}
+          </Code>
+        )}
+      </Text>
+      {detail && (
+        <Text size="xs" c="dimmed" className={classes.detail} title={detail}>
+          {detail}
+        </Text>
+      )}
+    </>
+  );
+}
+
+function Action({ action }: { action: string }) {
+  return (
+    <Badge color="ink" variant="outline" className={classes.action}>
+      {action}
+    </Badge>
+  );
+}
+
+export function AuditTable({ events }: { events: AuditEvent[] }) {
+  const narrow = useMediaQuery('(max-width: 48em)');
+
+  if (narrow) {
+    return (
+      <ul className={classes.entries} aria-label="Audit events">
+        {events.map((event) => (
+          <li key={event.id} className={classes.entry}>
+            <Group justify="space-between" gap="xs" wrap="nowrap">
+              <Action action={event.action} />
+              <Text size="xs" c="dimmed" className={classes.when}>
+                <time dateTime={event.at}>{formatDateTime(event.at)}</time>
+              </Text>
+            </Group>
+            <Stack gap={2} mt={6}>
+              <Text size="sm" className={classes.by}>
+                {event.actorEmail ?? 'System'}
+              </Text>
+              <Subject event={event} />
+            </Stack>
+          </li>
+        ))}
+      </ul>
+    );
+  }
+
+  return (
+    <Table.ScrollContainer minWidth={820} type="native">
       <Table className={classes.table} highlightOnHover>
         <Table.Thead>
           <Table.Tr>
@@ -22,41 +77,24 @@ export function AuditTable({ events }: { events: AuditEvent[] }) {
           </Table.Tr>
         </Table.Thead>
         <Table.Tbody>
-          {events.map((event) => {
-            const detail = detailText(event.detail);
-            return (
-              <Table.Tr key={event.id}>
-                <Table.Td className={classes.when}>
-                  <time dateTime={event.at}>{formatDateTime(event.at)}</time>
-                </Table.Td>
-                <Table.Td>
-                  <Badge color="ink" variant="outline" className={classes.action}>
-                    {event.action}
-                  </Badge>
-                </Table.Td>
-                <Table.Td>
-                  <Text size="sm" truncate>
-                    {event.actorEmail ?? 'System'}
-                  </Text>
-                </Table.Td>
-                <Table.Td>
-                  <Text size="sm">
-                    {event.subjectType}
-                    {event.subjectId && (
-                      <Code ml={6} className={classes.id} title={event.subjectId}>
-                        {event.subjectId.slice(0, 8)}
-                      </Code>
-                    )}
-                  </Text>
-                  {detail && (
-                    <Text size="xs" c="dimmed" className={classes.detail} title={detail}>
-                      {detail}
-                    </Text>
-                  )}
-                </Table.Td>
-              </Table.Tr>
-            );
-          })}
+          {events.map((event) => (
+            <Table.Tr key={event.id}>
+              <Table.Td className={classes.when}>
+                <time dateTime={event.at}>{formatDateTime(event.at)}</time>
+              </Table.Td>
+              <Table.Td>
+                <Action action={event.action} />
+              </Table.Td>
+              <Table.Td>
+                <Text size="sm" truncate>
+                  {event.actorEmail ?? 'System'}
+                </Text>
+              </Table.Td>
+              <Table.Td>
+                <Subject event={event} />
+              </Table.Td>
+            </Table.Tr>
+          ))}
         </Table.Tbody>
       </Table>
     </Table.ScrollContainer>

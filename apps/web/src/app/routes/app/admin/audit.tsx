@@ -6,7 +6,7 @@ export function AuditRoute() {
   useDocumentTitle('Audit log · Limitbook');
   return (
     <>
-      <PageHeader eyebrow="Admin" title="Audit log" description="Sign-ins, invitations, role changes and other account events, newest first." />
+      <PageHeader eyebrow="Admin" title="Audit log" description="Who changed what, and when: invitations, role and status changes and other recorded events, newest first." />
       <AuditLog />
     </>
   );

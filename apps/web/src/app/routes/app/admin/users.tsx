@@ -1,4 +1,4 @@
-import { Button, Paper, Skeleton, Stack, Text } from '@mantine/core';
+import { Button, Skeleton, Stack, Text } from '@mantine/core';
 import { useDisclosure, useDocumentTitle } from '@mantine/hooks';
 import { IconUserPlus } from '@tabler/icons-react';
 import { PanelError } from '@/components/errors/panel-error';
@@ -36,9 +36,7 @@ export function UsersRoute() {
         <PanelError error={users.error} onRetry={() => void users.refetch()} title="Users could not be loaded" />
       ) : (
         <>
-          <Paper style={{ overflow: 'hidden' }}>
-            <UsersTable users={users.data.items} currentUserId={me.id} />
-          </Paper>
+          <UsersTable users={users.data.items} currentUserId={me.id} />
           <Text size="sm" c="dimmed" mt="sm">
             {users.data.items.length < users.data.total
               ? `Showing ${users.data.items.length} of ${users.data.total} people.`
