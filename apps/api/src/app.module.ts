@@ -1,6 +1,6 @@
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
-import { type DynamicModule, Inject, Injectable, Logger, Module, type OnApplicationBootstrap } from '@nestjs/common';
+import { type DynamicModule, Inject, Injectable, Logger, Module, type OnApplicationBootstrap, type Type } from '@nestjs/common';
 import { APP_FILTER } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { AllExceptionsFilter } from './common/errors/all-exceptions.filter.js';
@@ -22,6 +22,8 @@ export interface AppOptions {
   database: () => Promise<DatabaseHandle>;
   /** Load the first accounts when the database is empty (off for `--seed`, which runs the seeder itself). */
   seedOnBoot: boolean;
+  /** Extra modules, e.g. a test-only controller. */
+  imports?: (Type | DynamicModule)[];
 }
 
 const WEB_DIST = Symbol('WEB_DIST');
@@ -74,6 +76,7 @@ export class AppModule {
         MethodsModule,
         DocsModule,
         ...webAppModules(options.config.webDist),
+        ...(options.imports ?? []),
       ],
       providers: [{ provide: APP_FILTER, useClass: AllExceptionsFilter }],
     };

@@ -12,6 +12,7 @@ import { PgTable } from 'drizzle-orm/pg-core';
 import pg from 'pg';
 import supertest from 'supertest';
 import { inject } from 'vitest';
+import { type AppOptions } from '../app.module.js';
 import { createApp } from '../app.setup.js';
 import { loadConfig } from '../config/app-config.js';
 import { type ResolvedConfig } from '../config/config.module.js';
@@ -25,6 +26,8 @@ import { readDemoPeople } from '../modules/users/users.seed.js';
 export interface TestAppOptions {
   /** Extra environment variables, parsed like the real ones (e.g. `{ LIMITBOOK_AUTH_RATE_LIMIT: '3' }`). */
   env?: Record<string, string>;
+  /** Extra modules to load beside the AppModule's own (test-only controllers). */
+  imports?: AppOptions['imports'];
   /** Nest log levels to print; errors only by default. */
   logLevels?: ('log' | 'error' | 'warn' | 'debug' | 'verbose' | 'fatal')[];
 }
@@ -125,6 +128,7 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
           return handle;
         },
         seedOnBoot: true,
+        imports: options.imports,
       },
       options.logLevels ?? ['error'],
     );

@@ -20,7 +20,12 @@ export class JwtAuthGuard extends AuthGuard('jwt') {
   override handleRequest<TUser = AuthUser>(error: unknown, user: TUser | false, info: unknown): TUser {
     if (error || !user) {
       const expired = info instanceof Error && info.name === 'TokenExpiredError';
-      throw new AppException(401, 'UNAUTHENTICATED', expired ? 'Your session has expired. Sign in again.' : 'Sign in to continue.');
+      const noToken = info instanceof Error && info.message === 'No auth token';
+      // RFC 6750: a bearer-protected resource names its scheme, and why a presented token failed.
+      const challenge = noToken ? 'Bearer realm="limitbook"' : 'Bearer realm="limitbook", error="invalid_token"';
+      throw new AppException(401, 'UNAUTHENTICATED', expired ? 'Your session has expired. Sign in again.' : 'Sign in to continue.', undefined, {
+        'WWW-Authenticate': challenge,
+      });
     }
     return user;
   }

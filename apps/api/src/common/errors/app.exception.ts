@@ -8,6 +8,8 @@ export class AppException extends HttpException {
     readonly code: ErrorCode,
     message: string,
     readonly fields?: Record<string, string>,
+    /** Response headers that belong with the error, e.g. WWW-Authenticate on a 401. */
+    readonly headers?: Record<string, string>,
   ) {
     const body: ErrorBody = { statusCode: status, code, message, ...(fields ? { fields } : {}) };
     super(body, status);
