@@ -25,22 +25,35 @@ function workerLocation(): { filename: string; execArgv: string[] } {
 
 export class EvaluationPool {
   private readonly pool: Piscina;
+  private warm: Promise<void> | undefined;
 
   constructor(options: EvaluationPoolOptions = {}) {
     const { filename, execArgv } = workerLocation();
     this.pool = new Piscina({
       filename,
       execArgv,
-      minThreads: 0,
+      // One thread stays loaded so a request never pays for starting a worker and loading mathjs.
+      minThreads: 1,
       maxThreads: options.maxThreads ?? Math.max(1, availableParallelism() - 1),
       maxQueue: options.maxQueue ?? 256,
       idleTimeout: 30_000,
     });
   }
 
-  /** Rejects with an AbortError when `timeoutMs` passes; piscina then terminates that worker. */
-  run(job: WorkerEvaluation, timeoutMs: number): Promise<WorkerOutcome> {
-    return this.pool.run(job, { signal: AbortSignal.timeout(timeoutMs) }) as Promise<WorkerOutcome>;
+  /**
+   * Rejects with an AbortError when `timeoutMs` passes; piscina then terminates that worker.
+   * The first call waits for a worker to load before the clock starts, so a cold start is not
+   * mistaken for a runaway evaluation.
+   */
+  async run(job: WorkerEvaluation, timeoutMs: number): Promise<WorkerOutcome> {
+    await this.warmUp();
+    return (await this.pool.run(job, { signal: AbortSignal.timeout(timeoutMs) })) as WorkerOutcome;
+  }
+
+  /** Loads a worker (and the engine in it) by running a job that returns at once. */
+  warmUp(): Promise<void> {
+    this.warm ??= this.pool.run({ method: '', inputs: {}, unit: 'mm' } satisfies WorkerEvaluation).then(() => undefined);
+    return this.warm;
   }
 
   get queueSize(): number {

@@ -10,7 +10,7 @@ import { MethodEvaluationException } from './methods.exception.js';
  */
 const workerTimeLimitMs: ReadonlyMap<string, number> = new Map([
   ['stack-1d', 60_000],
-  ['formula', 3_000],
+  ['formula', 5_000],
 ]);
 
 export interface EvaluationItem {

@@ -1,0 +1,2 @@
+// Fixtures for other packages' tests; not part of the runtime API.
+export { harmlessErrorFormulaExpressions, refusedFormulaExpressions } from './formula/hostile-expressions.js';
