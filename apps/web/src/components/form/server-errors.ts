@@ -16,7 +16,8 @@ export function applyServerErrors(form: FormLike, error: unknown, formFields: re
   }
   form.setErrors(known);
   if (Object.keys(known).length > 0 && leftover.length === 0) return null;
-  return leftover.length > 0 ? leftover.join(' ') : error.message;
+  // Messages about fields the form lacks (a link's token, say) read as a follow-up to the main one.
+  return [error.message, ...leftover.map((line) => (/[.!?]$/.test(line) ? line : `${line}.`))].join(' ');
 }
 
 /** A short, human description of an error for notifications and panels. */
