@@ -1,5 +1,7 @@
 import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
-  test: { include: ['src/**/*.spec.ts'], environment: 'node' },
+  // Pure functions without global state: sharing the module cache across spec files saves
+  // re-importing mathjs and zod for every file.
+  test: { include: ['src/**/*.spec.ts'], environment: 'node', isolate: false, pool: 'threads' },
 });
