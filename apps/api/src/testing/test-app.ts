@@ -170,7 +170,7 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     readMail: async (to) => {
       await app.get(MailService).flush();
       const rows = await handle.db.select().from(schema.capturedMail).orderBy(desc(schema.capturedMail.receivedAt));
-      return to ? rows.filter((row) => row.to.includes(to.toLowerCase())) : rows;
+      return to ? rows.filter((row) => row.to.some((address) => address.toLowerCase() === to.toLowerCase())) : rows;
     },
     rowCounts: async () => {
       const counts: Record<string, number> = {};
