@@ -10,9 +10,12 @@ import { type DatabaseHandle } from './database/database.js';
 import { AuditModule } from './modules/audit/audit.module.js';
 import { AuthModule } from './modules/auth/auth.module.js';
 import { DocsModule } from './modules/docs/docs.module.js';
+import { FilesModule } from './modules/files/files.module.js';
 import { HealthModule } from './modules/health/health.module.js';
+import { LibraryModule } from './modules/library/library.module.js';
 import { MailModule } from './modules/mail/mail.module.js';
 import { MethodsModule } from './modules/methods/methods.module.js';
+import { SearchModule } from './modules/search/search.module.js';
 import { UsersModule } from './modules/users/users.module.js';
 import { SeedModule } from './seed/seed.module.js';
 
@@ -74,6 +77,9 @@ export class AppModule {
         UsersModule,
         HealthModule,
         MethodsModule,
+        LibraryModule,
+        FilesModule,
+        SearchModule,
         DocsModule,
         ...webAppModules(options.config.webDist),
         ...(options.imports ?? []),
