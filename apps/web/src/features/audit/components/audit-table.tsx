@@ -40,7 +40,7 @@ function Action({ action }: { action: string }) {
 }
 
 export function AuditTable({ events }: { events: AuditEvent[] }) {
-  const narrow = useMediaQuery('(max-width: 48em)');
+  const narrow = useMediaQuery('(max-width: 48em)', false, { getInitialValueInEffect: false });
 
   if (narrow) {
     return (

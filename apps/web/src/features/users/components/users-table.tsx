@@ -21,7 +21,7 @@ type Props = { users: User[]; currentUserId: string };
 export function UsersTable({ users, currentUserId }: Props) {
   const update = useUpdateUser();
   const [pending, setPending] = useState<{ user: User; active: boolean } | null>(null);
-  const narrow = useMediaQuery('(max-width: 48em)');
+  const narrow = useMediaQuery('(max-width: 48em)', false, { getInitialValueInEffect: false });
 
   const changeRole = (user: User, value: string | null) => {
     const role = roleSchema.safeParse(value);
