@@ -7,6 +7,7 @@ export * from './users/users.js';
 export * from './mail/mail.js';
 export * from './audit/audit.js';
 export * from './methods/evaluation.js';
+export * from './methods/acceptance.js';
 export * from './methods/stack-1d.js';
 export * from './methods/formula.js';
 export * from './methods/feature-boundary.js';

@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import { errorBodySchema } from '../common/error.js';
+import { acceptanceRuleSchema } from './acceptance.js';
+import { lengthUnitSchema } from './length-unit.js';
 
-export const lengthUnits = ['mm', 'in'] as const;
-export const lengthUnitSchema = z.enum(lengthUnits, { message: 'Unit must be mm or in' });
-export type LengthUnit = z.infer<typeof lengthUnitSchema>;
+export { lengthUnits, lengthUnitSchema, type LengthUnit } from './length-unit.js';
 
 /** One line of a worked derivation: a label, a LaTeX formula with the numbers substituted, the value. */
 export const derivationStepSchema = z.object({
@@ -37,6 +37,8 @@ export type EvaluationResult = z.infer<typeof evaluationResultSchema>;
 export const evaluateRequestSchema = z.strictObject({
   inputs: z.record(z.string(), z.unknown(), { message: 'Inputs must be an object' }),
   unit: lengthUnitSchema.default('mm'),
+  /** A calculator block's acceptance rule, judged on the server beside the method's own checks. */
+  acceptance: acceptanceRuleSchema.optional(),
 });
 export type EvaluateRequest = z.input<typeof evaluateRequestSchema>;
 
@@ -49,6 +51,7 @@ export const batchEvaluateRequestSchema = z.strictObject({
         method: z.string({ message: 'Method id is required' }).min(1, 'Method id is required').max(100),
         inputs: z.record(z.string(), z.unknown(), { message: 'Inputs must be an object' }),
         unit: lengthUnitSchema.default('mm'),
+        acceptance: acceptanceRuleSchema.optional(),
       }),
       { message: 'Items must be a list' },
     )

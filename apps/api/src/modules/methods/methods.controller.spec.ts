@@ -80,6 +80,17 @@ describe('methods API', () => {
     expect(Object.keys(response.body.fields).some((path) => path.startsWith('inputs.feature.'))).toBe(true);
   });
 
+  it('judges a calculator block acceptance rule beside the method checks', async () => {
+    const pass = await post('/api/methods/wall-thickness/evaluate', { inputs: coaxialWall, acceptance: { output: 'minWall', operator: '>=', value: 4.8, unit: 'mm' } }).expect(200);
+    expect(pass.body.verdict).toMatchObject({ pass: true, checks: [{ label: 'Acceptance rule: minWall ≥ 4.8 mm', pass: true }] });
+    const fail = await post('/api/methods/wall-thickness/evaluate', { inputs: coaxialWall, acceptance: { output: 'minWall', operator: '>=', value: 5 } }).expect(200);
+    expect(fail.body.verdict).toMatchObject({ pass: false, summary: 'Fails the rule minWall ≥ 5' });
+    const unknownOutput = await post('/api/methods/wall-thickness/evaluate', { inputs: coaxialWall, acceptance: { output: 'minWal', operator: '>=', value: 1 } }).expect(400);
+    expect(unknownOutput.body.fields).toHaveProperty(['acceptance.output']);
+    const badOperator = await post('/api/methods/wall-thickness/evaluate', { inputs: coaxialWall, acceptance: { output: 'minWall', operator: '=>', value: 1 } }).expect(400);
+    expect(badOperator.body.fields).toHaveProperty(['acceptance.operator']);
+  });
+
   it('refuses a fit the standard does not define, a size out of range and an unknown unit', async () => {
     const undefinedFit = await post('/api/methods/iso286-fit/evaluate', { inputs: { nominalSize: 10, hole: 'H7', shaft: 'j9' } }).expect(400);
     expect(undefinedFit.body.fields).toHaveProperty(['inputs.shaft']);

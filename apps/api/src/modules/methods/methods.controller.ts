@@ -6,6 +6,7 @@ import {
   evaluationResultSchema,
   methodCatalogSchema,
   methodSummarySchema,
+  type AcceptanceRule,
   type LengthUnit,
 } from '@limitbook/contracts';
 import { z } from 'zod';
@@ -42,8 +43,11 @@ export class MethodsController {
     response: evaluationResultSchema,
     tag: 'Methods',
   })
-  evaluate(@ValidParams(methodIdParamsSchema) params: { id: string }, @ValidBody(evaluateRequestSchema) body: { inputs: Record<string, unknown>; unit: LengthUnit }) {
-    return this.methods.evaluate({ method: params.id, inputs: body.inputs, unit: body.unit });
+  evaluate(
+    @ValidParams(methodIdParamsSchema) params: { id: string },
+    @ValidBody(evaluateRequestSchema) body: { inputs: Record<string, unknown>; unit: LengthUnit; acceptance?: AcceptanceRule },
+  ) {
+    return this.methods.evaluate({ method: params.id, ...body });
   }
 
   @Post('evaluate')
@@ -53,7 +57,9 @@ export class MethodsController {
     response: batchEvaluateResponseSchema,
     tag: 'Methods',
   })
-  evaluateBatch(@ValidBody(batchEvaluateRequestSchema) body: { items: { method: string; inputs: Record<string, unknown>; unit: LengthUnit }[] }) {
+  evaluateBatch(
+    @ValidBody(batchEvaluateRequestSchema) body: { items: { method: string; inputs: Record<string, unknown>; unit: LengthUnit; acceptance?: AcceptanceRule }[] },
+  ) {
     return this.methods.evaluateBatch(body.items);
   }
 }

@@ -1,6 +1,6 @@
 import { Injectable, OnModuleDestroy } from '@nestjs/common';
-import type { BatchEvaluateResponse, EvaluationResult, LengthUnit, MethodSummary } from '@limitbook/contracts';
-import { EngineError, builtInMethods, describeMethod, evaluateMethod, findMethod } from '@limitbook/engine';
+import type { AcceptanceRule, BatchEvaluateResponse, EvaluationResult, LengthUnit, MethodSummary } from '@limitbook/contracts';
+import { EngineError, builtInMethods, describeMethod, evaluateMethod, findMethod, judgeAcceptance } from '@limitbook/engine';
 import { EvaluationPool } from './evaluation-pool.js';
 import { MethodEvaluationException } from './methods.exception.js';
 
@@ -17,6 +17,7 @@ export interface EvaluationItem {
   method: string;
   inputs: unknown;
   unit: LengthUnit;
+  acceptance?: AcceptanceRule | undefined;
 }
 
 @Injectable()
@@ -34,7 +35,19 @@ export class MethodsService implements OnModuleDestroy {
     return method;
   }
 
+  /** Evaluates a method and, when the item carries a calculator block's acceptance rule, judges it. */
   async evaluate(item: EvaluationItem): Promise<EvaluationResult> {
+    const result = await this.evaluateMethod(item);
+    if (!item.acceptance) return result;
+    try {
+      return judgeAcceptance(result, item.acceptance);
+    } catch (error) {
+      if (error instanceof EngineError) throw MethodEvaluationException.fromEngine(error.code, error.message, { 'acceptance.output': error.message });
+      throw error;
+    }
+  }
+
+  private async evaluateMethod(item: EvaluationItem): Promise<EvaluationResult> {
     const method = findMethod(item.method);
     if (!method) throw MethodEvaluationException.unknownMethod(item.method);
     const timeLimit = workerTimeLimitMs.get(method.id);
