@@ -13,6 +13,7 @@ describe('GET /api/health', () => {
   it('answers without a token and names the database driver', async () => {
     const response = await t.http.get('/api/health').expect(200);
     expect(response.body).toEqual({ status: 'ok', database: t.driver, version: expect.stringMatching(/^\d+\.\d+\.\d+/) });
+    expect(t.driver).toBe(process.env.LIMITBOOK_TEST_DATABASE_URL ? 'postgres' : 'pglite');
   });
 
   it('answers unknown API paths with the error shape', async () => {

@@ -100,7 +100,7 @@ export class DemoPeopleSeed implements SeedStep, OnModuleInit {
       }
     }
     await this.audit.record({ actor: null, action: 'demo.people_loaded', subjectType: 'demo', detail: { organisation: demo.organisation, people: demo.people.length } });
-    logger.log(`Loaded ${demo.people.length} demo people of ${demo.organisation}.`);
+    logger.log(`Loaded ${demo.people.length} demo people (${demo.organisation})`);
   }
 
   /** Lists only demo accounts that still sign in with their published password. */
