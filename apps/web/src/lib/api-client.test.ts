@@ -123,4 +123,22 @@ describe('api client', () => {
 
     await expect(api.get('/api/users', userListSchema)).rejects.toBeInstanceOf(ApiError);
   });
+
+  it('sends a FormData body as multipart, leaving the Content-Type (and its boundary) to the browser', async () => {
+    const session = createSessionStore(signedIn('token'));
+    let sent: RequestInit | undefined;
+    const fetch = vi.fn(async (_input: RequestInfo | URL, init?: RequestInit) => {
+      sent = init;
+      return jsonResponse(200, emptyList);
+    }) as unknown as typeof globalThis.fetch;
+    const api = createApiClient({ baseUrl: '', session, fetch });
+    const form = new FormData();
+    form.append('file', new Blob(['a,b\n1,2\n'], { type: 'text/csv' }), 'pins.csv');
+
+    await api.upload('/api/files', form, userListSchema);
+
+    expect(sent?.method).toBe('POST');
+    expect(sent?.body).toBe(form);
+    expect(new Headers(sent?.headers).get('Content-Type')).toBeNull();
+  });
 });

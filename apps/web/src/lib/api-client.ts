@@ -87,13 +87,15 @@ export function createApiClient(config: ClientConfig = {}) {
 
   async function send(path: string, options: RequestOptions, token: string | null): Promise<Response> {
     const headers: Record<string, string> = { Accept: 'application/json' };
-    if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+    // Multipart bodies carry their own boundary in the Content-Type the browser writes.
+    const multipart = options.body instanceof FormData;
+    if (options.body !== undefined && !multipart) headers['Content-Type'] = 'application/json';
     if (token) headers.Authorization = `Bearer ${token}`;
     try {
       return await doFetch(buildUrl(baseUrl, path, options.query), {
         method: options.method ?? 'GET',
         headers,
-        body: options.body === undefined ? undefined : JSON.stringify(options.body),
+        body: options.body === undefined ? undefined : multipart ? (options.body as FormData) : JSON.stringify(options.body),
         // The refresh cookie must travel when the API sits on another origin in development.
         credentials: 'include',
         signal: options.signal,
@@ -176,6 +178,11 @@ export function createApiClient(config: ClientConfig = {}) {
       request(path, schema, { ...options, method: 'POST', body }),
     patch: <S extends z.ZodType>(path: string, body: unknown, schema: S, options?: Omit<RequestOptions, 'method' | 'body'>) =>
       request(path, schema, { ...options, method: 'PATCH', body }),
+    put: <S extends z.ZodType>(path: string, body: unknown, schema: S, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+      request(path, schema, { ...options, method: 'PUT', body }),
+    /** Sends a `FormData` body as multipart/form-data (file uploads). */
+    upload: <S extends z.ZodType>(path: string, form: FormData, schema: S, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+      request(path, schema, { ...options, method: 'POST', body: form }),
     /** For endpoints answering 204 No Content. */
     send: (path: string, options: RequestOptions) => request(path, null, options),
     download,
