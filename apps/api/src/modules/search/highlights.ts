@@ -7,12 +7,13 @@ import { highlightEnd, highlightStart } from '../library/page-content.js';
  * blocks) become single spaces first, so the ranges index the returned text.
  */
 export function markedToRanges(marked: string): { text: string; ranges: TextRange[] } {
-  const flat = marked.replace(/\s+/g, ' ').trim();
   const ranges: TextRange[] = [];
   let text = '';
   let start: number | null = null;
-  for (const character of flat) {
-    if (character === highlightStart) {
+  for (const character of marked) {
+    if (/\s/.test(character)) {
+      if (text !== '' && !text.endsWith(' ')) text += ' ';
+    } else if (character === highlightStart) {
       start ??= text.length;
     } else if (character === highlightEnd) {
       if (start !== null && text.length > start) {
@@ -25,6 +26,10 @@ export function markedToRanges(marked: string): { text: string; ranges: TextRang
     } else {
       text += character;
     }
+  }
+  if (text.endsWith(' ')) {
+    text = text.slice(0, -1);
+    for (const range of ranges) range.end = Math.min(range.end, text.length);
   }
   return { text, ranges };
 }
