@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { Controller, Get, Module } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { type Role, roles } from '@limitbook/contracts';
@@ -35,7 +36,7 @@ function expressRoutes(t: TestApp): { method: string; path: string }[] {
   );
 }
 
-const concretePath = (path: string) => path.replace(/:[A-Za-z0-9_]+/g, '0f8e2c53-6a1d-4f4b-9a3e-5b7c2d1e8f90');
+const concretePath = (path: string) => path.replace(/:[A-Za-z0-9_]+/g, () => randomUUID());
 
 type Identity = 'none' | 'forged' | 'expired' | Role;
 const identities: Identity[] = ['none', 'forged', 'expired', ...roles];
