@@ -6,6 +6,7 @@ import swaggerUiDist from 'swagger-ui-dist';
 import { AppModule, type AppOptions } from './app.module.js';
 import { toErrorBody } from './common/errors/error-body.js';
 import { GLOBAL_PREFIX } from './common/openapi/route-catalog.js';
+import { type ResolvedConfig } from './config/config.module.js';
 import { SWAGGER_ASSETS_PATH } from './modules/docs/docs.controller.js';
 
 export const JSON_BODY_LIMIT = '1mb';
@@ -14,9 +15,11 @@ export const JSON_BODY_LIMIT = '1mb';
  * Everything main and the tests share. The app must be created with `bodyParser: false`:
  * the JSON parser is registered here with our size limit and our error shape.
  */
-export function configureApp(app: NestExpressApplication): NestExpressApplication {
+export function configureApp(app: NestExpressApplication, config: Pick<ResolvedConfig, 'trustProxy'>): NestExpressApplication {
   app.setGlobalPrefix(GLOBAL_PREFIX);
   app.disable('x-powered-by');
+  // Decides whether req.ip (which the auth rate limit keys on) comes from X-Forwarded-For.
+  app.set('trust proxy', config.trustProxy);
   app.use(cookieParser());
   app.useBodyParser('json', { limit: JSON_BODY_LIMIT });
   // Body-parser errors happen before Nest's filters see the request.
@@ -34,5 +37,5 @@ export async function createApp(options: AppOptions, logger?: false | ('log' | '
     bodyParser: false,
     ...(logger !== undefined ? { logger } : {}),
   });
-  return configureApp(app);
+  return configureApp(app, options.config);
 }

@@ -51,6 +51,33 @@ describe('loadConfig', () => {
     for (const name of ['PORT', 'DATABASE_URL', 'JWT_SECRET', 'LIMITBOOK_SEED_DEMO']) expect(problems).toContain(name);
   });
 
+  it('reads the refresh reuse grace window, 20 s unless set, 0 for strict rotation', () => {
+    expect(loadConfig({}).refreshReuseGraceSeconds).toBe(20);
+    expect(loadConfig({ LIMITBOOK_REFRESH_REUSE_GRACE_SECONDS: '0' }).refreshReuseGraceSeconds).toBe(0);
+    expect(() => loadConfig({ LIMITBOOK_REFRESH_REUSE_GRACE_SECONDS: '-1' })).toThrow(/LIMITBOOK_REFRESH_REUSE_GRACE_SECONDS/);
+    expect(() => loadConfig({ LIMITBOOK_REFRESH_REUSE_GRACE_SECONDS: '3600' })).toThrow(/LIMITBOOK_REFRESH_REUSE_GRACE_SECONDS/);
+  });
+
+  it("maps LIMITBOOK_TRUST_PROXY to Express's trust proxy setting", () => {
+    const trust = (value?: string) => loadConfig(value === undefined ? {} : { LIMITBOOK_TRUST_PROXY: value }).trustProxy;
+    expect(trust()).toBe(false);
+    expect(trust('')).toBe(false);
+    expect(trust('false')).toBe(false);
+    expect(trust('TRUE')).toBe(true);
+    expect(trust('2')).toBe(2);
+    expect(trust('loopback')).toEqual(['loopback']);
+    expect(trust(' loopback, 10.0.0.0/8 ,192.168.1.4, fd00::/8, 172.16.0.0/255.240.0.0')).toEqual([
+      'loopback',
+      '10.0.0.0/8',
+      '192.168.1.4',
+      'fd00::/8',
+      '172.16.0.0/255.240.0.0',
+    ]);
+    for (const bad of ['yes', '10.0.0.0/33', '10.0.0.0/255.0.255.0', 'proxy.internal', '10.0.0.1/8/8', ',', '1.5']) {
+      expect(() => trust(bad), bad).toThrow(/LIMITBOOK_TRUST_PROXY/);
+    }
+  });
+
   it('needs the admin e-mail and password together', () => {
     expect(() => loadConfig({ LIMITBOOK_ADMIN_EMAIL: 'admin@example.com' })).toThrow(/LIMITBOOK_ADMIN_PASSWORD/);
   });

@@ -1,3 +1,4 @@
+import { isIP } from 'node:net';
 import { resolve } from 'node:path';
 import { z } from 'zod';
 import { defaultMigrationsDir, defaultWebDist } from './workspace-paths.js';
@@ -11,6 +12,43 @@ const optionalText = z
   .trim()
   .optional()
   .transform((value) => (value ? value : undefined));
+
+/** Express's `trust proxy` setting: trust nothing, everything, the nearest n hops, or these addresses. */
+export type TrustProxy = boolean | number | string[];
+
+const trustProxyPresets = new Set(['loopback', 'linklocal', 'uniquelocal']);
+
+function isProxyAddress(entry: string): boolean {
+  if (trustProxyPresets.has(entry) || isIP(entry) !== 0) return true;
+  const [address = '', range = '', ...rest] = entry.split('/');
+  const family = isIP(address);
+  if (family === 0 || rest.length > 0) return false;
+  if (/^\d{1,3}$/.test(range)) return Number(range) <= (family === 4 ? 32 : 128);
+  // 10.0.0.0/255.0.0.0 as proxy-addr accepts it: a contiguous mask, else Express throws at boot.
+  if (family !== 4 || isIP(range) !== 4) return false;
+  const mask = range.split('.').reduce((bits, octet) => bits * 256 + Number(octet), 0);
+  const hostBits = 2 ** 32 - 1 - mask;
+  return (hostBits & (hostBits + 1)) === 0;
+}
+
+/** Undefined when the value is none of the accepted forms. */
+export function parseTrustProxy(value: string): TrustProxy | undefined {
+  const lowered = value.toLowerCase();
+  if (lowered === 'false') return false;
+  if (lowered === 'true') return true;
+  if (/^\d+$/.test(value)) return Number(value);
+  const entries = value
+    .split(',')
+    .map((entry) => entry.trim())
+    .filter(Boolean);
+  return entries.length > 0 && entries.every(isProxyAddress) ? entries : undefined;
+}
+
+const trustProxy = optionalText
+  .refine((value) => value === undefined || parseTrustProxy(value) !== undefined, {
+    message: 'Use false, true, a hop count, or comma-separated addresses/subnets (e.g. loopback, 10.0.0.0/8)',
+  })
+  .transform((value) => (value === undefined ? false : (parseTrustProxy(value) ?? false)));
 
 const envSchema = z
   .object({
@@ -35,6 +73,9 @@ const envSchema = z
     LIMITBOOK_AUTH_RATE_LIMIT: z.coerce.number({ message: 'Must be a number' }).int().min(1).default(10),
     LIMITBOOK_AUTH_RATE_WINDOW_SECONDS: z.coerce.number({ message: 'Must be a number' }).int().min(1).default(60),
     LIMITBOOK_ACCESS_TOKEN_SECONDS: z.coerce.number({ message: 'Must be a number' }).int().min(10).default(15 * 60),
+    // A long window would let a stolen, already rotated token through; 0 makes rotation strict.
+    LIMITBOOK_REFRESH_REUSE_GRACE_SECONDS: z.coerce.number({ message: 'Must be a number' }).int().min(0).max(300).default(20),
+    LIMITBOOK_TRUST_PROXY: trustProxy,
     LIMITBOOK_LOG_SQL: booleanFlag.default(false),
   })
   .refine((env) => Boolean(env.LIMITBOOK_ADMIN_EMAIL) === Boolean(env.LIMITBOOK_ADMIN_PASSWORD), {
@@ -57,12 +98,15 @@ export interface AppConfig {
   jwtSecret: string | undefined;
   accessTokenSeconds: number;
   refreshTokenDays: number;
+  /** How long a rotated refresh token still yields its family's live token (concurrent tabs). */
+  refreshReuseGraceSeconds: number;
   smtpUrl: string | undefined;
   mailFrom: string;
   publicUrl: string;
   bootstrapAdmin: { email: string; password: string } | undefined;
   seedDemo: boolean;
   authRateLimit: { limit: number; windowSeconds: number };
+  trustProxy: TrustProxy;
   logSql: boolean;
 }
 
@@ -91,6 +135,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, cwd = process.c
     jwtSecret: e.JWT_SECRET,
     accessTokenSeconds: e.LIMITBOOK_ACCESS_TOKEN_SECONDS,
     refreshTokenDays: 14,
+    refreshReuseGraceSeconds: e.LIMITBOOK_REFRESH_REUSE_GRACE_SECONDS,
     smtpUrl: e.SMTP_URL,
     mailFrom: e.MAIL_FROM,
     publicUrl: (e.PUBLIC_URL ?? `http://localhost:${e.PORT}`).replace(/\/+$/, ''),
@@ -100,6 +145,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, cwd = process.c
         : undefined,
     seedDemo: e.LIMITBOOK_SEED_DEMO,
     authRateLimit: { limit: e.LIMITBOOK_AUTH_RATE_LIMIT, windowSeconds: e.LIMITBOOK_AUTH_RATE_WINDOW_SECONDS },
+    trustProxy: e.LIMITBOOK_TRUST_PROXY,
     logSql: e.LIMITBOOK_LOG_SQL,
   };
 }

@@ -3,7 +3,8 @@ import { users } from './users.js';
 
 /**
  * One row per issued refresh token. Tokens issued from one sign-in share a family: a rotated
- * (used) token presented again means it leaked, and the whole family is revoked.
+ * (used) token presented again after the short reuse grace window means it leaked, and the whole
+ * family is revoked.
  */
 export const refreshTokens = pgTable(
   'refresh_tokens',

@@ -29,4 +29,31 @@ describe('auth rate limit', () => {
     const limited = await t.http.post('/api/auth/forgot-password').send({ email }).expect(429);
     expect(limited.body.code).toBe('RATE_LIMITED');
   });
+
+  it('ignores X-Forwarded-For by default: every client behind a proxy shares its address', async () => {
+    const email = 'shared.proxy@brackwater.example';
+    const from = (client: string) => t.http.post('/api/auth/sign-in').set('X-Forwarded-For', client).send({ email, password: 'guess number one' });
+    for (let attempt = 0; attempt < 3; attempt++) expect((await from('203.0.113.10')).status).toBe(401);
+    expect((await from('203.0.113.20')).status).toBe(429);
+  });
+});
+
+describe('auth rate limit behind a trusted proxy', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp({ env: { LIMITBOOK_AUTH_RATE_LIMIT: '3', LIMITBOOK_TRUST_PROXY: 'loopback' } });
+  });
+  afterAll(async () => {
+    await t?.close();
+  });
+
+  it('counts each X-Forwarded-For client separately', async () => {
+    const email = 'trusted.proxy@brackwater.example';
+    const from = (client: string) => t.http.post('/api/auth/sign-in').set('X-Forwarded-For', client).send({ email, password: 'guess number one' });
+    for (let attempt = 0; attempt < 3; attempt++) expect((await from('203.0.113.10')).status).toBe(401);
+    expect((await from('203.0.113.10')).status).toBe(429);
+    // The balancer appends the address it saw; the client is the last untrusted hop.
+    expect((await from('203.0.113.20')).status).toBe(401);
+    expect((await from('198.51.100.7, 203.0.113.10')).status).toBe(429);
+  });
 });

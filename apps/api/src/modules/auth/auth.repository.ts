@@ -42,8 +42,8 @@ export class AuthRepository {
       .where(eq(users.id, userId));
   }
 
-  async insertRefreshToken(token: { userId: string; familyId: string; tokenHash: string; expiresAt: Date }): Promise<void> {
-    await this.db.insert(refreshTokens).values(token);
+  async insertRefreshToken(token: { userId: string; familyId: string; tokenHash: string; expiresAt: Date }, executor: Executor = this.db): Promise<void> {
+    await executor.insert(refreshTokens).values(token);
   }
 
   async findRefreshToken(tokenHash: string): Promise<RefreshTokenRow | undefined> {
@@ -51,9 +51,15 @@ export class AuthRepository {
     return row;
   }
 
-  /** Marks a token used; false when another request already did, which counts as reuse. */
-  async claimRefreshToken(id: string): Promise<boolean> {
-    const claimed = await this.db
+  /** Reads a token and holds its row until `tx` ends: concurrent refreshes of one token queue here. */
+  async lockRefreshToken(tokenHash: string, tx: Executor): Promise<RefreshTokenRow | undefined> {
+    const [row] = await tx.select().from(refreshTokens).where(eq(refreshTokens.tokenHash, tokenHash)).for('update');
+    return row;
+  }
+
+  /** Marks a token used; false if it already was (cannot happen while the row is locked, but costs nothing). */
+  async markRotated(id: string, tx: Executor): Promise<boolean> {
+    const claimed = await tx
       .update(refreshTokens)
       .set({ rotatedAt: new Date() })
       .where(and(eq(refreshTokens.id, id), isNull(refreshTokens.rotatedAt), isNull(refreshTokens.revokedAt)))

@@ -13,7 +13,16 @@ import { AuthRepository } from './auth.repository.js';
 import { toSessionUser } from './dto/session-user.dto.js';
 import { OneTimeTokenService, resetValidMinutes } from './one-time-token.service.js';
 import { PasswordService } from './password.service.js';
-import { hashToken, newOpaqueToken } from './token-hash.js';
+import { hashToken, newOpaqueToken, successorKey, successorToken } from './token-hash.js';
+
+/** Rotations that can follow one another inside a grace window; a bound on the successor walk, not a tuning knob. */
+const MAX_SUCCESSOR_HOPS = 16;
+
+type RotationOutcome =
+  | { kind: 'issued'; user: UserRow; refreshToken: string; expiresAt: Date }
+  | { kind: 'reused'; familyId: string; userId: string }
+  | { kind: 'inactive'; familyId: string }
+  | { kind: 'invalid' };
 
 export interface IssuedSession {
   response: SignInResponse;
@@ -24,6 +33,7 @@ export interface IssuedSession {
 @Injectable()
 export class AuthService {
   private readonly logger = new Logger('Auth');
+  private readonly successorKey: Buffer;
 
   constructor(
     @Inject(APP_CONFIG) private readonly config: ResolvedConfig,
@@ -33,7 +43,9 @@ export class AuthService {
     private readonly jwt: JwtService,
     private readonly mail: MailService,
     private readonly audit: AuditService,
-  ) {}
+  ) {
+    this.successorKey = successorKey(config.jwtSecret);
+  }
 
   async signIn({ email, password }: SignInRequest): Promise<IssuedSession> {
     const user = await this.repository.findUserByEmail(email);
@@ -49,22 +61,22 @@ export class AuthService {
 
   async refresh(refreshToken: string | undefined): Promise<IssuedSession> {
     if (!refreshToken) throw AuthException.of('no-refresh-token');
-    const stored = await this.repository.findRefreshToken(hashToken(refreshToken));
-    if (!stored) throw AuthException.of('refresh-invalid');
-    if (stored.revokedAt) throw AuthException.of('refresh-invalid');
-    if (stored.rotatedAt || !(await this.repository.claimRefreshToken(stored.id))) {
-      await this.repository.revokeFamily(stored.familyId);
-      this.logger.warn(`A rotated refresh token was presented again; revoked its session family ${stored.familyId}.`);
-      await this.audit.record({ actor: null, action: 'auth.refresh_reused', subjectType: 'user', subjectId: stored.userId, detail: { familyId: stored.familyId } });
-      throw AuthException.of('refresh-invalid');
+    // Decide under the row lock, act after commit: a throw inside the transaction would roll back the revocation.
+    const outcome = await this.repository.transaction((tx) => this.rotate(refreshToken, tx));
+    switch (outcome.kind) {
+      case 'issued':
+        return this.sessionFor(outcome.user, outcome.refreshToken, outcome.expiresAt);
+      case 'reused':
+        await this.repository.revokeFamily(outcome.familyId);
+        this.logger.warn(`A rotated refresh token was presented again; revoked its session family ${outcome.familyId}.`);
+        await this.audit.record({ actor: null, action: 'auth.refresh_reused', subjectType: 'user', subjectId: outcome.userId, detail: { familyId: outcome.familyId } });
+        throw AuthException.of('refresh-invalid');
+      case 'inactive':
+        await this.repository.revokeFamily(outcome.familyId);
+        throw AuthException.of('refresh-invalid');
+      case 'invalid':
+        throw AuthException.of('refresh-invalid');
     }
-    if (stored.expiresAt.getTime() <= Date.now()) throw AuthException.of('refresh-invalid');
-    const user = await this.repository.findUserById(stored.userId);
-    if (!user || user.status !== 'active') {
-      await this.repository.revokeFamily(stored.familyId);
-      throw AuthException.of('refresh-invalid');
-    }
-    return this.issueSession(user, stored.familyId);
   }
 
   async signOut(refreshToken: string | undefined): Promise<void> {
@@ -113,10 +125,46 @@ export class AuthService {
     await this.repository.revokeAllForUser(userId, executor);
   }
 
+  private async rotate(token: string, tx: Executor): Promise<RotationOutcome> {
+    const stored = await this.repository.lockRefreshToken(hashToken(token), tx);
+    if (!stored || stored.revokedAt) return { kind: 'invalid' };
+    const now = Date.now();
+    if (stored.rotatedAt && now - stored.rotatedAt.getTime() > this.config.refreshReuseGraceSeconds * 1000) {
+      return { kind: 'reused', familyId: stored.familyId, userId: stored.userId };
+    }
+    if (!stored.rotatedAt && stored.expiresAt.getTime() <= now) return { kind: 'invalid' };
+    const user = await this.repository.findUserById(stored.userId, tx);
+    if (!user || user.status !== 'active') return { kind: 'inactive', familyId: stored.familyId };
+
+    if (!stored.rotatedAt) {
+      if (!(await this.repository.markRotated(stored.id, tx))) return { kind: 'invalid' };
+      const successor = successorToken(token, this.successorKey);
+      const expiresAt = new Date(now + this.config.refreshTokenDays * 24 * 60 * 60 * 1000);
+      await this.repository.insertRefreshToken({ userId: user.id, familyId: stored.familyId, tokenHash: hashToken(successor), expiresAt }, tx);
+      return { kind: 'issued', user, refreshToken: successor, expiresAt };
+    }
+
+    // Within the grace window (another tab refreshed first): answer with the successor already issued, not a new fork, so the family keeps one live token and a thief racing its owner is still caught.
+    let current = token;
+    for (let hop = 0; hop < MAX_SUCCESSOR_HOPS; hop++) {
+      const next = successorToken(current, this.successorKey);
+      const row = await this.repository.lockRefreshToken(hashToken(next), tx);
+      // No derived successor: rotated before successors were derived, or under another JWT secret.
+      if (!row || row.revokedAt || row.familyId !== stored.familyId) return { kind: 'invalid' };
+      if (!row.rotatedAt) return { kind: 'issued', user, refreshToken: next, expiresAt: row.expiresAt };
+      current = next;
+    }
+    return { kind: 'invalid' };
+  }
+
   private async issueSession(user: UserRow, familyId: string): Promise<IssuedSession> {
     const refreshToken = newOpaqueToken();
     const refreshExpiresAt = new Date(Date.now() + this.config.refreshTokenDays * 24 * 60 * 60 * 1000);
     await this.repository.insertRefreshToken({ userId: user.id, familyId, tokenHash: hashToken(refreshToken), expiresAt: refreshExpiresAt });
+    return this.sessionFor(user, refreshToken, refreshExpiresAt);
+  }
+
+  private async sessionFor(user: UserRow, refreshToken: string, refreshExpiresAt: Date): Promise<IssuedSession> {
     const accessToken = await this.jwt.signAsync({ sub: user.id }, { expiresIn: this.config.accessTokenSeconds });
     return { response: { accessToken, expiresIn: this.config.accessTokenSeconds, user: toSessionUser(user) }, refreshToken, refreshExpiresAt };
   }

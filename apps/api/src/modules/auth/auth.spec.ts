@@ -3,12 +3,21 @@ import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { oneTimeTokens, refreshTokens, users } from '../../database/schema/index.js';
 import { createTestApp, type TestApp } from '../../testing/test-app.js';
+import { hashToken } from './token-hash.js';
 
 function cookieFrom(setCookie: string | string[] | undefined): string {
   const line = [setCookie ?? []].flat().find((entry) => entry.startsWith('limitbook_refresh='));
   if (!line) throw new Error('No refresh cookie was set');
   return line;
 }
+
+/** The `limitbook_refresh=…` pair of a response, for the next request's Cookie header. */
+function nextCookie(response: { headers: Record<string, unknown> }): string {
+  return cookieFrom(response.headers['set-cookie'] as string[] | undefined).split(';')[0]!;
+}
+
+// The spec's app runs with a 1 s reuse grace window; this waits it out.
+const pastGrace = () => new Promise((resolve) => setTimeout(resolve, 1100));
 
 function linkToken(text: string, path: string): string {
   const match = new RegExp(`http://limitbook\\.test${path}\\?token=([A-Za-z0-9_%-]+)`).exec(text);
@@ -19,7 +28,7 @@ function linkToken(text: string, path: string): string {
 describe('auth', () => {
   let t: TestApp;
   beforeAll(async () => {
-    t = await createTestApp();
+    t = await createTestApp({ env: { LIMITBOOK_REFRESH_REUSE_GRACE_SECONDS: '1' } });
   });
   afterAll(async () => {
     await t?.close();
@@ -72,7 +81,8 @@ describe('auth', () => {
       const again = await t.http.post('/api/auth/refresh').set('Cookie', second).expect(200);
       const third = cookieFrom(again.headers['set-cookie']).split(';')[0]!;
 
-      // The first cookie leaked and is replayed: refused, and the live token of its family dies with it.
+      // The first cookie leaked and is replayed after the grace window: refused, and the live token of its family dies with it.
+      await pastGrace();
       const replay = await t.http.post('/api/auth/refresh').set('Cookie', first.refreshCookie).expect(401);
       expect(replay.body).toMatchObject({ code: 'UNAUTHENTICATED' });
       await t.http.post('/api/auth/refresh').set('Cookie', third).expect(401);
@@ -82,10 +92,64 @@ describe('auth', () => {
       expect(family.every((row) => row.revokedAt !== null)).toBe(true);
     });
 
+    it('gives concurrent refreshes of one cookie (several tabs) the same successor, without ending the session', async () => {
+      const session = await t.session('reader');
+      const tabs = await Promise.all([1, 2, 3].map(() => t.http.post('/api/auth/refresh').set('Cookie', session.refreshCookie)));
+      expect(tabs.map((response) => response.status)).toEqual([200, 200, 200]);
+      const cookies = new Set(tabs.map(nextCookie));
+      expect(cookies.size).toBe(1);
+      const [successor] = [...cookies];
+      expect(successor).not.toBe(session.refreshCookie);
+      for (const tab of tabs) await t.http.get('/api/auth/me').set(bearer(tab.body.accessToken)).expect(200);
+
+      // One live token in the family: the one every tab now holds.
+      const family = await familyRows(session.refreshCookie);
+      expect(family.length).toBe(2);
+      expect(family.filter((row) => row.rotatedAt === null && row.revokedAt === null).map((row) => row.tokenHash)).toEqual([hashOfCookie(successor!)]);
+      await t.http.post('/api/auth/refresh').set('Cookie', successor!).expect(200);
+    });
+
+    it('hands a late tab the live token even after the successor has rotated again', async () => {
+      const session = await t.session('reader');
+      const second = nextCookie(await t.http.post('/api/auth/refresh').set('Cookie', session.refreshCookie).expect(200));
+      const third = nextCookie(await t.http.post('/api/auth/refresh').set('Cookie', second).expect(200));
+      const late = await t.http.post('/api/auth/refresh').set('Cookie', session.refreshCookie).expect(200);
+      expect(nextCookie(late)).toBe(third);
+      expect((await familyRows(third)).every((row) => row.revokedAt === null)).toBe(true);
+    });
+
+    it('revokes the family when a rotated token comes back after the grace window', async () => {
+      const session = await t.session('reader');
+      const successor = nextCookie(await t.http.post('/api/auth/refresh').set('Cookie', session.refreshCookie).expect(200));
+      await pastGrace();
+      await t.http.post('/api/auth/refresh').set('Cookie', session.refreshCookie).expect(401);
+      await t.http.post('/api/auth/refresh').set('Cookie', successor).expect(401);
+      const family = await familyRows(successor);
+      expect(family.length).toBe(2);
+      expect(family.every((row) => row.revokedAt !== null)).toBe(true);
+    });
+
+    it('does not bring a signed-out session back through the grace window', async () => {
+      const session = await t.session('reader');
+      const successor = nextCookie(await t.http.post('/api/auth/refresh').set('Cookie', session.refreshCookie).expect(200));
+      await t.http.post('/api/auth/sign-out').set('Cookie', successor).expect(204);
+      await t.http.post('/api/auth/refresh').set('Cookie', session.refreshCookie).expect(401);
+    });
+
     it('refuses a refresh without a cookie or with an unknown one', async () => {
       await t.http.post('/api/auth/refresh').expect(401);
       await t.http.post('/api/auth/refresh').set('Cookie', 'limitbook_refresh=not-a-real-token').expect(401);
     });
+
+    function hashOfCookie(cookie: string): string {
+      return hashToken(decodeURIComponent(cookie.slice('limitbook_refresh='.length)));
+    }
+
+    async function familyRows(cookie: string) {
+      const [row] = await t.db.select().from(refreshTokens).where(eq(refreshTokens.tokenHash, hashOfCookie(cookie)));
+      if (!row) throw new Error('Unknown refresh token');
+      return t.db.select().from(refreshTokens).where(eq(refreshTokens.familyId, row.familyId));
+    }
 
     async function familyOf(userId: string): Promise<string | undefined> {
       const rows = await t.db.select().from(refreshTokens).where(eq(refreshTokens.userId, userId));
