@@ -44,6 +44,21 @@ export const routes: RouteObject[] = [
         ErrorBoundary: RouteError,
       },
       {
+        path: paths.library.collection.path,
+        lazy: () => import('./routes/app/collection').then((m) => ({ Component: m.CollectionRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.search.path,
+        lazy: () => import('./routes/app/search').then((m) => ({ Component: m.SearchRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.standards.page.path,
+        lazy: () => import('./routes/app/standard').then((m) => ({ Component: m.StandardRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
         path: paths.admin.root.path,
         lazy: () => import('./routes/app/admin/root').then((m) => ({ Component: m.AdminRoot })),
         ErrorBoundary: RouteError,

@@ -21,6 +21,18 @@ export const paths = {
   },
   library: {
     home: { path: '/library', getHref: (q?: string) => withQuery('/library', { q }) },
+    tagged: { path: '/library', getHref: (tag: string) => withQuery('/library', { tag }) },
+    collection: {
+      path: '/library/:collectionKey',
+      getHref: (collectionKey: string, tag?: string) => withQuery(`/library/${encodeURIComponent(collectionKey)}`, { tag }),
+    },
+  },
+  search: {
+    path: '/search',
+    getHref: (query: { q?: string; collection?: string; tag?: string } = {}) => withQuery('/search', query),
+  },
+  standards: {
+    page: { path: '/standards/:documentNumber', getHref: (documentNumber: string) => `/standards/${encodeURIComponent(documentNumber)}` },
   },
   admin: {
     root: { path: '/admin', getHref: () => '/admin' },

@@ -71,7 +71,6 @@ function FieldLabel({ field, locked, context }: { field: Field; locked: boolean;
   return (
     <span className={classes.label}>
       {field.label}
-      {field.kind === 'number' && field.length && <span className={classes.labelUnit}>({context.unit})</span>}
       {locked && <LockMark hint={context.lockHint} />}
       {context.renderFieldAction?.(field.path)}
     </span>
@@ -129,9 +128,9 @@ function NumberInputField({
       spellCheck={false}
       error={error}
       size={compact ? 'xs' : 'sm'}
-      placeholder={field.nullable || !field.required ? (field.defaultValue !== undefined ? formatNumber(field.defaultValue) : 'Empty') : undefined}
+      placeholder={field.nullable || !field.required ? (field.defaultValue !== undefined ? `${formatNumber(field.defaultValue)} (default)` : compact ? undefined : 'Not set') : undefined}
       leftSection={compact && locked ? <LockMark hint={context.lockHint} /> : undefined}
-      rightSection={field.length ? <span className={classes.unit}>{context.unit}</span> : undefined}
+      rightSection={field.length && !compact ? <span className={classes.unit}>{context.unit}</span> : undefined}
       rightSectionPointerEvents="none"
       classNames={{ input: classes.numberInput }}
       data-locked={locked || undefined}
@@ -146,7 +145,8 @@ function EnumInputField({ field, path, context, compact = false }: { field: Enum
   const error = context.errorAt(path);
   const none = '__none__';
   const options = [...field.options.map((option) => ({ value: String(option.value), label: option.label }))];
-  if (field.nullable || !field.required) options.push({ value: none, label: field.nullable ? 'None' : 'Default' });
+  if (field.nullable || (!field.required && field.defaultValue === undefined)) options.push({ value: none, label: field.nullable ? 'None' : 'Not set' });
+  if (compact && field.name === 'sense') for (const option of options) option.label = option.value === '1' ? '+' : option.value === '-1' ? '−' : option.label;
   const current = raw === undefined || raw === null ? (field.defaultValue !== undefined ? String(field.defaultValue) : none) : String(raw);
   const onChange = (next: string | null) => {
     if (next === null || next === none) return context.set(path, field.nullable ? null : undefined);
@@ -233,12 +233,12 @@ function TableInputField({ field, context }: { field: TableField; context: Conte
 
   return (
     <Input.Wrapper label={<FieldLabel field={field} locked={tableLocked} context={context} />} description={field.description} error={error} data-path={field.path}>
-      <Table.ScrollContainer minWidth={760} className={classes.tableScroll}>
+      <Table.ScrollContainer minWidth={700} className={classes.tableScroll}>
         <Table withTableBorder withColumnBorders verticalSpacing={4} horizontalSpacing={6} className={classes.table}>
           <Table.Thead>
             <Table.Tr>
               {field.columns.map((column) => (
-                <Table.Th key={column.name} className={column.kind === 'text' ? classes.nameColumn : undefined}>
+                <Table.Th key={column.name} className={classes[`column-${column.kind === 'number' ? 'number' : column.name === 'sense' ? 'sense' : column.kind}`]}>
                   {column.label}
                   {column.kind === 'number' && column.length ? <span className={classes.labelUnit}>({context.unit})</span> : null}
                 </Table.Th>

@@ -7,7 +7,7 @@ export function Quantity({ value, unit }: { value: number; unit?: string }) {
   return (
     <span className={classes.quantity}>
       <span className={classes.number}>{formatNumber(value)}</span>
-      {unit ? <span className={classes.quantityUnit}>{unit === '%' ? '%' : `\u2009${unit}`}</span> : null}
+      {unit ? <span className={classes.quantityUnit}>{unit === '%' ? '%' : `\u00a0${unit}`}</span> : null}
     </span>
   );
 }

@@ -1,8 +1,15 @@
-import { Button, Paper, Stack, Text, TextInput, Title } from '@mantine/core';
-import { IconSearch } from '@tabler/icons-react';
-import { useState, type FormEvent } from 'react';
-import { useSearchParams } from 'react-router-dom';
-import classes from './library-home.module.css';
+import { Anchor, Badge, Button, Group, Paper, SimpleGrid, Skeleton, Stack, Text, Title } from '@mantine/core';
+import type { Collection } from '@limitbook/contracts';
+import { IconArrowRight, IconX } from '@tabler/icons-react';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { PanelError } from '@/components/errors/panel-error';
+import { paths } from '@/config/paths';
+import { useCollections } from '../api/get-collections';
+import { usePages } from '../api/get-pages';
+import { useTags } from '../api/get-tags';
+import { PageList } from './page-list';
+import { SearchBox } from './search-box';
+import classes from './library.module.css';
 
 function greeting(hour: number) {
   if (hour < 12) return 'Good morning';
@@ -10,17 +17,96 @@ function greeting(hour: number) {
   return 'Good evening';
 }
 
-/** Library landing page. The library has no standards yet, and the page says so plainly. */
-export function LibraryHome({ firstName }: { firstName: string }) {
-  const [params, setParams] = useSearchParams();
-  const query = params.get('q') ?? '';
-  const [draft, setDraft] = useState(query);
+function CollectionCard({ collection }: { collection: Collection }) {
+  return (
+    <Paper component={Link} to={paths.library.collection.getHref(collection.key)} className={classes.collectionCard} p="md">
+      <Group justify="space-between" align="flex-start" wrap="nowrap" gap="sm">
+        <Title order={3} className={classes.collectionName}>
+          {collection.name}
+        </Title>
+        <Badge variant="light" color="ink" radius="xs" className={classes.count}>
+          {collection.pageCount} {collection.pageCount === 1 ? 'standard' : 'standards'}
+        </Badge>
+      </Group>
+      <Text size="sm" c="gray.7" mt={6} lineClamp={3}>
+        {collection.description}
+      </Text>
+      <Text size="sm" fw={600} c="ink.7" mt="sm" className={classes.open}>
+        Open collection <IconArrowRight size={14} aria-hidden />
+      </Text>
+    </Paper>
+  );
+}
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    const q = draft.trim();
-    setParams(q ? { q } : {});
-  };
+function Collections() {
+  const collections = useCollections();
+  if (collections.isPending) {
+    return (
+      <SimpleGrid cols={{ base: 1, sm: 2, lg: 4 }}>
+        {[0, 1, 2, 3].map((index) => (
+          <Skeleton key={index} h={150} />
+        ))}
+      </SimpleGrid>
+    );
+  }
+  if (collections.isError) return <PanelError error={collections.error} onRetry={() => void collections.refetch()} title="Collections could not be loaded" />;
+  if (collections.data.items.length === 0) {
+    return <Text c="dimmed">No collections yet. Authors create them when they write the first standard.</Text>;
+  }
+  return (
+    <SimpleGrid cols={{ base: 1, sm: 2, lg: 4 }} spacing="md">
+      {collections.data.items.map((collection) => (
+        <CollectionCard key={collection.id} collection={collection} />
+      ))}
+    </SimpleGrid>
+  );
+}
+
+function PagesPanel({ tag }: { tag: string | null }) {
+  const pages = usePages(tag ? { tag, sort: 'number', limit: 100 } : { sort: 'recent', limit: 8 });
+  if (pages.isPending) return <Skeleton h={240} />;
+  if (pages.isError) return <PanelError error={pages.error} onRetry={() => void pages.refetch()} title="Standards could not be loaded" />;
+  if (pages.data.items.length === 0) {
+    return <Text c="dimmed">{tag ? `No released standard is tagged “${tag}”.` : 'No standard has been released yet.'}</Text>;
+  }
+  return <PageList pages={pages.data.items} showCollection label={tag ? `Standards tagged ${tag}` : 'Recently changed standards'} />;
+}
+
+function TagCloud({ active }: { active: string | null }) {
+  const tags = useTags();
+  if (!tags.data || tags.data.items.length === 0) return null;
+  return (
+    <section aria-labelledby="tags-title" className={classes.block}>
+      <Title order={2} id="tags-title" className={classes.blockTitle}>
+        Browse by tag
+      </Title>
+      <Group gap={6} wrap="wrap">
+        {tags.data.items.map((item) => (
+          <Badge
+            key={item.tag}
+            component={Link}
+            to={active === item.tag ? paths.library.home.getHref() : paths.library.tagged.getHref(item.tag)}
+            variant={active === item.tag ? 'filled' : 'outline'}
+            color={active === item.tag ? 'ink' : 'gray'}
+            radius="xs"
+            size="lg"
+            className={classes.tagChip}
+            aria-current={active === item.tag ? 'true' : undefined}
+          >
+            {item.tag} <span className={classes.tagCount}>{item.count}</span>
+          </Badge>
+        ))}
+      </Group>
+    </section>
+  );
+}
+
+/** The library's front page: search, the collections, what changed lately, and tags to browse by. */
+export function LibraryHome({ firstName }: { firstName: string }) {
+  const navigate = useNavigate();
+  const [params] = useSearchParams();
+  const tag = params.get('tag');
+  const legacyQuery = params.get('q') ?? '';
 
   return (
     <Stack gap="xl">
@@ -30,49 +116,42 @@ export function LibraryHome({ firstName }: { firstName: string }) {
           {greeting(new Date().getHours())}, {firstName}
         </Title>
         <Text className={classes.lead}>Find your team&rsquo;s tolerancing standards and run their calculators.</Text>
-        <form role="search" onSubmit={submit} className={classes.search}>
-          <TextInput
-            aria-label="Search standards"
-            placeholder="Search by document number, title or topic"
-            leftSection={<IconSearch size={18} aria-hidden />}
-            size="md"
-            value={draft}
-            onChange={(event) => setDraft(event.currentTarget.value)}
-            className={classes.searchInput}
-          />
-          <Button type="submit" size="md">
-            Search
-          </Button>
-        </form>
+        <SearchBox initial={legacyQuery} onSearch={(q) => q && navigate(paths.search.getHref({ q }))} />
       </section>
 
-      <Paper className={classes.empty} p="xl">
-        <Stack align="center" gap="xs" ta="center" maw={520} mx="auto">
-          <svg width="56" height="56" viewBox="0 0 56 56" aria-hidden="true" className={classes.emptyMark}>
-            <rect x="10" y="6" width="36" height="44" rx="2" />
-            <path d="M17 17h22M17 24h22M17 31h14" />
-            <path d="M36 38h6M39 35v6" className={classes.plus} />
-          </svg>
-          {query ? (
-            <>
-              <Title order={2} className={classes.emptyTitle}>
-                Nothing matches &ldquo;{query}&rdquo;
-              </Title>
-              <Text c="dimmed">The library has no standards yet, so there is nothing to search.</Text>
-            </>
-          ) : (
-            <>
-              <Title order={2} className={classes.emptyTitle}>
-                No standards yet
-              </Title>
-              <Text c="dimmed">
-                Released standards will be listed here, grouped by collection, each with its revision and its
-                calculators.
-              </Text>
-            </>
+      <section aria-labelledby="collections-title" className={classes.block}>
+        <Title order={2} id="collections-title" className={classes.blockTitle}>
+          Collections
+        </Title>
+        <Collections />
+      </section>
+
+      <section aria-labelledby="pages-title" className={classes.block}>
+        <Group justify="space-between" align="baseline">
+          <Title order={2} id="pages-title" className={classes.blockTitle}>
+            {tag ? (
+              <>
+                Tagged <span className={classes.tagName}>{tag}</span>
+              </>
+            ) : (
+              'Recently changed'
+            )}
+          </Title>
+          {tag && (
+            <Button component={Link} to={paths.library.home.getHref()} variant="subtle" size="compact-sm" leftSection={<IconX size={14} />}>
+              Clear tag
+            </Button>
           )}
-        </Stack>
-      </Paper>
+        </Group>
+        <PagesPanel tag={tag} />
+      </section>
+
+      <TagCloud active={tag} />
+      {!tag && (
+        <Text size="sm" c="dimmed">
+          Looking for something specific? <Anchor component={Link} to={paths.search.getHref()}>Search the full text</Anchor> of every released standard.
+        </Text>
+      )}
     </Stack>
   );
 }

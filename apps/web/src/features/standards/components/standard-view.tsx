@@ -1,0 +1,156 @@
+import { Anchor, Badge, Breadcrumbs, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { calculatorBlockAttrsSchema } from '@limitbook/editor-schema';
+import { useMemo } from 'react';
+import { Link } from 'react-router-dom';
+import { CalculatorBlockView, useMethods, type CalculatorBlockConfig } from '@/components/calculator';
+import { DocumentRenderer } from '@/components/document/document-renderer';
+import { outlineOf, type DocNode } from '@/components/document/outline';
+import { PanelError } from '@/components/errors/panel-error';
+import { paths } from '@/config/paths';
+import { isApiError } from '@/lib/api-client';
+import { formatDate, formatDateTime } from '@/lib/format';
+import { usePage } from '../api/get-page';
+import { usePageEvaluations } from '../api/use-page-evaluations';
+import { TableOfContents } from './table-of-contents';
+import classes from './standard-view.module.css';
+
+function blocksOf(node: DocNode, found: CalculatorBlockConfig[] = []): CalculatorBlockConfig[] {
+  if (node.type === 'calculatorBlock') {
+    const parsed = calculatorBlockAttrsSchema.safeParse(node.attrs ?? {});
+    if (parsed.success) found.push(parsed.data);
+    return found;
+  }
+  node.content?.forEach((child) => blocksOf(child, found));
+  return found;
+}
+
+function NotFound({ documentNumber }: { documentNumber: string }) {
+  return (
+    <Stack gap="sm" maw={640}>
+      <Title order={1}>No standard {documentNumber}</Title>
+      <Text>
+        There is no released standard with this number, or it is not released yet.{' '}
+        <Anchor component={Link} to={paths.search.getHref({ q: documentNumber })}>
+          Search for it
+        </Anchor>{' '}
+        or go back to the <Anchor component={Link} to={paths.library.home.getHref()}>library</Anchor>.
+      </Text>
+    </Stack>
+  );
+}
+
+/** A standard as readers see it: the released text with every calculator block live. */
+export function StandardView({ documentNumber }: { documentNumber: string }) {
+  const page = usePage(documentNumber);
+  const methods = useMethods();
+  const document = page.data?.revision.document as DocNode | undefined;
+  const blocks = useMemo(() => (document ? blocksOf(document) : []), [document]);
+  const outline = useMemo(() => (document ? outlineOf(document).filter((entry) => entry.level <= 2) : []), [document]);
+  const evaluations = usePageEvaluations(page.data?.revision.id, blocks, methods.byId, methods.isSuccess);
+
+  if (page.isPending) {
+    return (
+      <Stack gap="md" maw={760}>
+        <Skeleton h={18} w={140} />
+        <Skeleton h={36} w="80%" />
+        <Skeleton h={16} w="60%" />
+        <Skeleton h={400} mt="lg" />
+      </Stack>
+    );
+  }
+  if (page.isError) {
+    if (isApiError(page.error) && (page.error.status === 404 || page.error.status === 400)) return <NotFound documentNumber={documentNumber} />;
+    return <PanelError error={page.error} onRetry={() => void page.refetch()} title="This standard could not be loaded" />;
+  }
+
+  const { revision } = page.data;
+  const released = revision.state === 'published';
+  const blocksById = new Map(blocks.map((block) => [block.blockId, block]));
+
+  return (
+    <div className={classes.layout}>
+      <article className={classes.article} aria-labelledby="standard-title">
+        <Breadcrumbs separator="›" className={classes.crumbs}>
+          <Anchor component={Link} to={paths.library.home.getHref()} size="sm">
+            Library
+          </Anchor>
+          <Anchor component={Link} to={paths.library.collection.getHref(page.data.collection.key)} size="sm">
+            {page.data.collection.name}
+          </Anchor>
+          <Text size="sm">{page.data.documentNumber}</Text>
+        </Breadcrumbs>
+
+        <header className={classes.header}>
+          <Group gap="sm" align="center" wrap="wrap">
+            <Text className={classes.number}>{page.data.documentNumber}</Text>
+            <Badge color={released ? 'verdigris' : 'amber'} variant={released ? 'light' : 'filled'} radius="xs" className={classes.state}>
+              {released ? 'Published' : 'Draft'}
+            </Badge>
+            <Text size="sm" c="dimmed">
+              Version {revision.version}
+            </Text>
+          </Group>
+          <Title order={1} id="standard-title" className={classes.title}>
+            {revision.title}
+          </Title>
+          <dl className={classes.meta}>
+            <div>
+              <dt>Collection</dt>
+              <dd>
+                <Anchor component={Link} to={paths.library.collection.getHref(page.data.collection.key)}>
+                  {page.data.collection.name}
+                </Anchor>
+              </dd>
+            </div>
+            <div>
+              <dt>Owner</dt>
+              <dd>{page.data.owner?.name ?? '—'}</dd>
+            </div>
+            <div>
+              <dt>{released ? 'Published' : 'Last saved'}</dt>
+              <dd title={formatDateTime(revision.publishedAt ?? revision.updatedAt)}>
+                {formatDate(revision.publishedAt ?? revision.updatedAt)}
+                {revision.publishedBy ? ` by ${revision.publishedBy.name}` : ''}
+              </dd>
+            </div>
+          </dl>
+          {page.data.tags.length > 0 && (
+            <Group gap={6} wrap="wrap" mt="sm">
+              {page.data.tags.map((tag) => (
+                <Badge key={tag} component={Link} to={paths.library.tagged.getHref(tag)} variant="outline" color="gray" radius="xs" className={classes.tag}>
+                  {tag}
+                </Badge>
+              ))}
+            </Group>
+          )}
+          {!released && (
+            <Text size="sm" c="amber.9" mt="sm">
+              This is a draft: it has not been published and is not yet a rule.
+            </Text>
+          )}
+        </header>
+
+        {methods.isError && <PanelError error={methods.error} onRetry={() => void methods.refetch()} title="The calculators could not load their methods" />}
+
+        <div className={classes.body} data-standard-body>
+          <DocumentRenderer
+            document={revision.document as DocNode}
+            fileUrls={page.data.fileUrls}
+            renderCalculator={(attrs) => {
+              const block = blocksById.get(String(attrs.blockId));
+              if (!block) {
+                return <PanelError error={new Error('This calculator block is malformed and cannot run.')} title="Calculator unavailable" />;
+              }
+              return <CalculatorBlockView block={block} method={methods.byId(block.method)} catalogLoaded={methods.isSuccess} evaluationEnabled={evaluations.settled} />;
+            }}
+          />
+        </div>
+      </article>
+      {outline.length > 1 && (
+        <aside className={classes.aside}>
+          <TableOfContents entries={outline} />
+        </aside>
+      )}
+    </div>
+  );
+}
