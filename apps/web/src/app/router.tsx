@@ -59,6 +59,16 @@ export const routes: RouteObject[] = [
         ErrorBoundary: RouteError,
       },
       {
+        path: paths.standards.create.path,
+        lazy: () => import('./routes/app/standards/new').then((m) => ({ Component: m.NewStandardRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.standards.edit.path,
+        lazy: () => import('./routes/app/standards/edit').then((m) => ({ Component: m.EditStandardRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
         path: paths.admin.root.path,
         lazy: () => import('./routes/app/admin/root').then((m) => ({ Component: m.AdminRoot })),
         ErrorBoundary: RouteError,

@@ -33,6 +33,8 @@ export const paths = {
   },
   standards: {
     page: { path: '/standards/:documentNumber', getHref: (documentNumber: string) => `/standards/${encodeURIComponent(documentNumber)}` },
+    create: { path: '/standards/new', getHref: () => '/standards/new' },
+    edit: { path: '/standards/:documentNumber/edit', getHref: (documentNumber: string) => `/standards/${encodeURIComponent(documentNumber)}/edit` },
   },
   admin: {
     root: { path: '/admin', getHref: () => '/admin' },

@@ -3,6 +3,7 @@ import type { Role } from '@limitbook/contracts';
 /** What each role may open in the app. The server enforces the same rules; this only shapes the UI. */
 const areas = {
   library: ['admin', 'author', 'reviewer', 'reader'],
+  'standards.edit': ['admin', 'author'],
   'admin.users': ['admin'],
   'admin.mail': ['admin'],
   'admin.audit': ['admin'],

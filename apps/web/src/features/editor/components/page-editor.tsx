@@ -1,0 +1,176 @@
+import { Alert, Badge, Button, Group, Kbd, Modal, Stack, Text, TextInput } from '@mantine/core';
+import { useDocumentTitle } from '@mantine/hooks';
+import { notifications } from '@mantine/notifications';
+import { RichTextEditor } from '@mantine/tiptap';
+import type { Page } from '@limitbook/contracts';
+import { useEditor, type JSONContent } from '@tiptap/react';
+import { IconDeviceFloppy, IconSend } from '@tabler/icons-react';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { Link, useBlocker } from 'react-router-dom';
+import { formatRelative } from '../lib/format-time';
+import { pageEditorExtensions } from '../lib/editor-extensions';
+import { createFileUrls, FileUrlsContext } from '../hooks/use-file-urls';
+import { useDraftSession } from '../hooks/use-draft-session';
+import { useSaveShortcut } from '../hooks/use-save-shortcut';
+import { ConflictModal } from './conflict-modal';
+import { DocumentProblemsAlert } from './document-problems-alert';
+import { EditorToolbar } from './editor-toolbar';
+import classes from './page-editor.module.css';
+
+type Props = {
+  page: Page;
+  /** Where readers see the page; the editor goes there after publishing. */
+  onPublished: (page: Page) => void;
+  /** Link back to the page as readers see it, when it has been published. */
+  readerHref?: string;
+};
+
+export function PageEditor({ page, onPublished, readerHref }: Props) {
+  const fileUrls = useMemo(() => createFileUrls(page.fileUrls), [page.fileUrls]);
+  const extensions = useMemo(() => pageEditorExtensions(), []);
+  const editor = useEditor({
+    extensions,
+    content: page.revision.document as JSONContent,
+    immediatelyRender: true,
+    shouldRerenderOnTransaction: false,
+    editorProps: { attributes: { 'aria-label': 'Page body', class: classes.prose ?? '' } },
+  });
+  const session = useDraftSession(editor, page, fileUrls);
+  const { state, dirty } = session;
+  const [confirmPublish, setConfirmPublish] = useState(false);
+  const leaving = useRef(false);
+
+  useDocumentTitle(`${dirty ? '• ' : ''}Editing ${page.documentNumber} · Limitbook`);
+  useSaveShortcut(() => void session.save());
+
+  const blocker = useBlocker(({ currentLocation, nextLocation }) => dirty && !leaving.current && currentLocation.pathname !== nextLocation.pathname);
+  useEffect(() => {
+    if (!dirty) return;
+    const warn = (event: BeforeUnloadEvent) => event.preventDefault();
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [dirty]);
+
+  const publish = async () => {
+    setConfirmPublish(false);
+    const published = await session.publish();
+    if (!published) return;
+    notifications.show({ color: 'verdigris', title: `${published.documentNumber} published`, message: 'Readers now see this revision.' });
+    leaving.current = true;
+    onPublished(published);
+  };
+
+  const busy = state.phase !== 'idle';
+  const titleError = state.refused?.fields.title;
+
+  return (
+    <FileUrlsContext.Provider value={fileUrls}>
+      <Stack gap={0} className={classes.shell}>
+        <RichTextEditor editor={editor} className={classes.editor} variant="subtle" labels={{ tableInsertControlLabel: 'Insert table' }}>
+          <div className={classes.stickyTop}>
+            <div className={classes.actionBar}>
+              <Group gap="xs" wrap="nowrap" className={classes.identity}>
+                <Text className={classes.number}>{page.documentNumber}</Text>
+                <Badge color="amber" variant="light">
+                  Draft · v{state.baseVersion}
+                </Badge>
+                <Text size="sm" className={classes.status} role="status" aria-live="polite" data-dirty={dirty || undefined}>
+                  {state.phase === 'saving'
+                    ? 'Saving…'
+                    : state.phase === 'publishing'
+                      ? 'Publishing…'
+                      : dirty
+                        ? 'Unsaved changes'
+                        : state.savedAt
+                          ? `Saved ${formatRelative(state.savedAt)}`
+                          : 'No changes'}
+                </Text>
+              </Group>
+              <Group gap="xs" wrap="nowrap">
+                {readerHref && (
+                  <Button component={Link} to={readerHref} variant="subtle" size="sm">
+                    View published
+                  </Button>
+                )}
+                <Button
+                  variant="default"
+                  size="sm"
+                  leftSection={<IconDeviceFloppy size={16} />}
+                  rightSection={
+                    <Kbd size="xs" className={classes.kbd}>
+                      Ctrl S
+                    </Kbd>
+                  }
+                  onClick={() => void session.save()}
+                  loading={state.phase === 'saving'}
+                  disabled={busy || (!dirty && !state.overwriting)}
+                >
+                  Save draft
+                </Button>
+                <Button size="sm" leftSection={<IconSend size={16} />} onClick={() => setConfirmPublish(true)} disabled={busy || !!state.conflict} loading={state.phase === 'publishing'}>
+                  Publish
+                </Button>
+              </Group>
+            </div>
+            <EditorToolbar />
+          </div>
+
+          <div className={classes.sheet}>
+            {state.overwriting && (
+              <Alert color="amber" title="You are keeping your copy" mb="md">
+                Saving replaces version {state.overwriting.version} (saved {formatRelative(state.overwriting.updatedAt)}) with what you see here.
+              </Alert>
+            )}
+            {state.refused && <DocumentProblemsAlert editor={editor} refused={state.refused} />}
+            <TextInput
+              aria-label="Title"
+              placeholder="Title of the standard"
+              value={session.title}
+              onChange={(event) => session.setTitle(event.currentTarget.value)}
+              error={titleError}
+              maxLength={200}
+              variant="unstyled"
+              classNames={{ input: classes.titleInput }}
+            />
+            <RichTextEditor.Content className={classes.content} />
+          </div>
+        </RichTextEditor>
+      </Stack>
+
+      <ConflictModal
+        conflict={state.conflict}
+        onReload={() => void session.reloadLatest()}
+        onKeepMine={() => void session.keepMine()}
+      />
+
+      <Modal opened={confirmPublish} onClose={() => setConfirmPublish(false)} title={`Publish ${page.documentNumber}?`}>
+        <Stack gap="md">
+          <Text size="sm">
+            Readers will see this revision at once, and its calculators will run with the defaults, locks and rules you set.
+            {dirty && ' Your unsaved changes are saved first.'}
+          </Text>
+          <Group justify="flex-end">
+            <Button variant="default" onClick={() => setConfirmPublish(false)}>
+              Keep editing
+            </Button>
+            <Button onClick={() => void publish()}>Publish</Button>
+          </Group>
+        </Stack>
+      </Modal>
+
+      <Modal opened={blocker.state === 'blocked'} onClose={() => blocker.reset?.()} title="Leave without saving?">
+        <Stack gap="md">
+          <Text size="sm">Your changes to {page.documentNumber} are not saved. If you leave now, they are lost.</Text>
+          <Group justify="flex-end">
+            <Button variant="default" onClick={() => blocker.reset?.()}>
+              Stay
+            </Button>
+            <Button color="redline" onClick={() => blocker.proceed?.()}>
+              Leave and discard
+            </Button>
+          </Group>
+        </Stack>
+      </Modal>
+    </FileUrlsContext.Provider>
+  );
+}
