@@ -30,14 +30,14 @@ describe('sign-in, roles and invitations in the built app', () => {
       await page.getByRole('button', { name: 'Sign in' }).click();
       await page.waitForURL(/\/library$/);
       await page.getByRole('heading', { level: 1, name: /, Tomas$/ }).waitFor();
-      await page.getByRole('heading', { name: 'No standards yet' }).waitFor();
+      await page.getByRole('heading', { name: 'Collections' }).waitFor();
       const nav = page.getByRole('navigation', { name: 'Main navigation' });
       expect(await nav.getByRole('link', { name: 'Library' }).count()).toBe(1);
       expect(await nav.getByRole('link', { name: 'Users' }).count()).toBe(0);
 
       // The session survives a reload through the refresh cookie.
       await page.reload();
-      await page.getByRole('heading', { name: 'No standards yet' }).waitFor();
+      await page.getByRole('heading', { name: 'Collections' }).waitFor();
 
       await signOut(page, demo.reader.name);
       await page.goto('/library');
@@ -81,7 +81,7 @@ describe('sign-in, roles and invitations in the built app', () => {
       await page.getByText('Your account is ready.').waitFor();
 
       await signIn(page, invitee.email, invitee.password);
-      await page.getByRole('heading', { name: 'No standards yet' }).waitFor();
+      await page.getByRole('heading', { name: 'Collections' }).waitFor();
       await page.getByRole('button', { name: `Account menu for ${invitee.name}` }).click();
       await page.getByRole('menu').getByText('Author', { exact: true }).waitFor();
 

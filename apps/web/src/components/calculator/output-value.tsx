@@ -32,6 +32,14 @@ export function OutputValue({ description, value, unit }: { description: OutputD
   }
   if (typeof value === 'number') {
     const shownUnit = kind === 'length' ? unit : kind === 'percent' ? '%' : '';
+    // A negative clearance is an interference; say so rather than leave the sign to be read.
+    if (kind === 'length' && value < 0 && /clearance/i.test(description?.name ?? '')) {
+      return (
+        <span>
+          <Quantity value={value} unit={shownUnit} /> <span className={classes.muted}>(interference {formatNumber(-value)}&nbsp;{unit})</span>
+        </span>
+      );
+    }
     return <Quantity value={value} unit={shownUnit} />;
   }
   if (value && typeof value === 'object' && !Array.isArray(value)) {

@@ -53,8 +53,6 @@ function WallSweepChart({ sweep, unit, acceptance }: { sweep: Sweep; unit: strin
         series={series}
         curveType="linear"
         withDots={false}
-        withLegend
-        legendProps={{ verticalAlign: 'bottom', height: 56 }}
         xAxisProps={{ tickFormatter: (value: number) => tick(value) }}
         yAxisProps={{ domain: ['auto', 'auto'], tickFormatter: (value: number) => tick(value), width: 56 }}
         valueFormatter={(value) => `${formatNumber(value)} ${unit}`}
@@ -64,6 +62,16 @@ function WallSweepChart({ sweep, unit, acceptance }: { sweep: Sweep; unit: strin
         gridAxis="xy"
         strokeWidth={2}
       />
+      <ul className={classes.legend}>
+        {series.map((item) => (
+          <li key={item.name}>
+            <svg width="22" height="8" aria-hidden="true">
+              <line x1="0" y1="4" x2="22" y2="4" stroke={`var(--mantine-color-${item.color.replace('.', '-')})`} strokeWidth="2.5" strokeDasharray={item.strokeDasharray} />
+            </svg>
+            {item.label}
+          </li>
+        ))}
+      </ul>
     </figure>
   );
 }

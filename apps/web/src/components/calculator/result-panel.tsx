@@ -103,6 +103,57 @@ function SimpleTable({ rows, unit, caption }: { rows: Record<string, unknown>[];
   );
 }
 
+type FitSide = { designation: string; upperDeviation: number; lowerDeviation: number; maxSize: number; minSize: number; itGrade: string; toleranceValue: number };
+
+function isFitSide(value: unknown): value is FitSide {
+  return !!value && typeof value === 'object' && typeof (value as FitSide).designation === 'string' && typeof (value as FitSide).upperDeviation === 'number';
+}
+
+/** Hole and shaft side by side, as a limits-and-fits table is read. */
+function FitTable({ hole, shaft, unit }: { hole: unknown; shaft: unknown; unit: string }) {
+  const sides = [
+    { title: 'Hole', symbols: ['ES', 'EI'], side: isFitSide(hole) ? hole : null },
+    { title: 'Shaft', symbols: ['es', 'ei'], side: isFitSide(shaft) ? shaft : null },
+  ].filter((entry) => entry.side !== null) as { title: string; symbols: string[]; side: FitSide }[];
+  if (sides.length === 0) return null;
+  const rows: { label: string; value: (side: FitSide, symbols: string[]) => ReactNode }[] = [
+    { label: 'Tolerance class', value: (side) => <strong>{side.designation}</strong> },
+    { label: 'Upper deviation', value: (side, symbols) => <>{symbols[0]} <Quantity value={side.upperDeviation} unit={unit} /></> },
+    { label: 'Lower deviation', value: (side, symbols) => <>{symbols[1]} <Quantity value={side.lowerDeviation} unit={unit} /></> },
+    { label: 'Largest size', value: (side) => <Quantity value={side.maxSize} unit={unit} /> },
+    { label: 'Smallest size', value: (side) => <Quantity value={side.minSize} unit={unit} /> },
+    { label: 'Tolerance', value: (side) => <>{side.itGrade} <Quantity value={side.toleranceValue} unit={unit} /></> },
+  ];
+  return (
+    <Table withTableBorder withColumnBorders verticalSpacing={4} className={classes.dataTable} aria-label="Limits of hole and shaft">
+      <Table.Thead>
+        <Table.Tr>
+          <Table.Th />
+          {sides.map((entry) => (
+            <Table.Th key={entry.title} className={classes.numeric}>
+              {entry.title}
+            </Table.Th>
+          ))}
+        </Table.Tr>
+      </Table.Thead>
+      <Table.Tbody>
+        {rows.map((row) => (
+          <Table.Tr key={row.label}>
+            <Table.Th scope="row" className={classes.outputLabel}>
+              {row.label}
+            </Table.Th>
+            {sides.map((entry) => (
+              <Table.Td key={entry.title} className={classes.numeric}>
+                {row.value(entry.side, entry.symbols)}
+              </Table.Td>
+            ))}
+          </Table.Tr>
+        ))}
+      </Table.Tbody>
+    </Table>
+  );
+}
+
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
     <section className={classes.section}>
@@ -119,6 +170,8 @@ export function ResultPanel({ result, method, acceptance, stale = false, hideCau
     ...describedOutputs.map((output) => output.name).filter((name) => name in result.outputs),
     ...Object.keys(result.outputs).filter((name) => !describedOutputs.some((output) => output.name === name)),
   ].filter((name) => !separatelyShown.has(name));
+  const fit = isFitSide(result.outputs.hole) || isFitSide(result.outputs.shaft);
+  const listed = fit ? names.filter((name) => name !== 'hole' && name !== 'shaft') : names;
   const bonusTable = Array.isArray(result.outputs.bonusTable) ? (result.outputs.bonusTable as Record<string, unknown>[]) : null;
   const contributions = Array.isArray(result.outputs.contributions) ? (result.outputs.contributions as Record<string, unknown>[]) : null;
   const hasChart = !!result.outputs.sweep || !!(result.outputs.monteCarlo as { histogram?: unknown } | undefined)?.histogram;
@@ -160,10 +213,12 @@ export function ResultPanel({ result, method, acceptance, stale = false, hideCau
         </Alert>
       )}
 
+      {fit && <FitTable hole={result.outputs.hole} shaft={result.outputs.shaft} unit={result.unit} />}
+
       <Table.ScrollContainer minWidth={300}>
         <Table verticalSpacing={6} className={classes.outputs} aria-label="Results">
           <Table.Tbody>
-            {names.map((name) => {
+            {listed.map((name) => {
               const description = describedOutputs.find((output) => output.name === name);
               return (
                 <Table.Tr key={name} data-output={name}>

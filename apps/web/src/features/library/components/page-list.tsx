@@ -40,7 +40,7 @@ export function PageList({ pages, showCollection = false, label }: { pages: Page
               {page.title}
             </Anchor>
             <Text size="xs" c="dimmed">
-              {showCollection ? `${page.collection.name} · ` : ''}Published {formatDate(page.publishedAt ?? page.updatedAt)}
+              {showCollection ? `${page.collection.name} · ` : ''}Released {formatDate(page.publishedAt ?? page.updatedAt)}
             </Text>
             <Tags tags={page.tags} max={3} />
           </li>
@@ -58,7 +58,7 @@ export function PageList({ pages, showCollection = false, label }: { pages: Page
             <Table.Th>Title</Table.Th>
             {showCollection && <Table.Th>Collection</Table.Th>}
             <Table.Th>Tags</Table.Th>
-            <Table.Th w={120}>Published</Table.Th>
+            <Table.Th w={120}>Released</Table.Th>
           </Table.Tr>
         </Table.Thead>
         <Table.Tbody>

@@ -29,7 +29,7 @@ function Result({ hit }: { hit: SearchHit }) {
       )}
       <Group gap={6} wrap="wrap" mt={4}>
         <Text size="xs" c="dimmed">
-          {hit.collection.name} · Published {formatDate(hit.publishedAt)}
+          {hit.collection.name} · Released {formatDate(hit.publishedAt)}
         </Text>
         {hit.tags.slice(0, 5).map((tag) => (
           <Badge key={tag} variant="light" color="gray" radius="xs" size="sm" className={classes.tag}>

@@ -14,6 +14,8 @@ import { usePageEvaluations } from '../api/use-page-evaluations';
 import { TableOfContents } from './table-of-contents';
 import classes from './standard-view.module.css';
 
+const stateLabels: Record<string, string> = { draft: 'Draft', in_review: 'In review', published: 'Released', released: 'Released', superseded: 'Superseded' };
+
 function blocksOf(node: DocNode, found: CalculatorBlockConfig[] = []): CalculatorBlockConfig[] {
   if (node.type === 'calculatorBlock') {
     const parsed = calculatorBlockAttrsSchema.safeParse(node.attrs ?? {});
@@ -64,7 +66,11 @@ export function StandardView({ documentNumber }: { documentNumber: string }) {
   }
 
   const { revision } = page.data;
-  const released = revision.state === 'published';
+  // Read as plain strings: document control adds states and letters to what a revision carries.
+  const state: string = revision.state;
+  const letter = (revision as { revisionLetter?: string | null }).revisionLetter ?? null;
+  const obsolete = (page.data as { obsolete?: { reason: string; at: string } | null }).obsolete ?? null;
+  const released = state === 'published' || state === 'released';
   const blocksById = new Map(blocks.map((block) => [block.blockId, block]));
 
   return (
@@ -83,12 +89,10 @@ export function StandardView({ documentNumber }: { documentNumber: string }) {
         <header className={classes.header}>
           <Group gap="sm" align="center" wrap="wrap">
             <Text className={classes.number}>{page.data.documentNumber}</Text>
-            <Badge color={released ? 'verdigris' : 'amber'} variant={released ? 'light' : 'filled'} radius="xs" className={classes.state}>
-              {released ? 'Published' : 'Draft'}
+            {letter && <Text className={classes.letter}>Rev. {letter}</Text>}
+            <Badge color={released ? 'verdigris' : state === 'superseded' ? 'gray' : 'amber'} variant={released ? 'light' : 'filled'} radius="xs" className={classes.state}>
+              {stateLabels[state] ?? state}
             </Badge>
-            <Text size="sm" c="dimmed">
-              Version {revision.version}
-            </Text>
           </Group>
           <Title order={1} id="standard-title" className={classes.title}>
             {revision.title}
@@ -107,7 +111,7 @@ export function StandardView({ documentNumber }: { documentNumber: string }) {
               <dd>{page.data.owner?.name ?? '—'}</dd>
             </div>
             <div>
-              <dt>{released ? 'Published' : 'Last saved'}</dt>
+              <dt>{released ? 'Released' : 'Last saved'}</dt>
               <dd title={formatDateTime(revision.publishedAt ?? revision.updatedAt)}>
                 {formatDate(revision.publishedAt ?? revision.updatedAt)}
                 {revision.publishedBy ? ` by ${revision.publishedBy.name}` : ''}
@@ -125,7 +129,12 @@ export function StandardView({ documentNumber }: { documentNumber: string }) {
           )}
           {!released && (
             <Text size="sm" c="amber.9" mt="sm">
-              This is a draft: it has not been published and is not yet a rule.
+              This revision is not released: it is not yet a rule.
+            </Text>
+          )}
+          {obsolete && (
+            <Text size="sm" c="redline.8" fw={600} mt="sm" role="note">
+              Obsolete since {formatDate(obsolete.at)}: {obsolete.reason}
             </Text>
           )}
         </header>
