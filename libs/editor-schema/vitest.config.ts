@@ -1,5 +1,6 @@
 import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
-  test: { include: ['src/**/*.spec.ts'], environment: 'node' },
+  // Editor specs build real Tiptap editors in jsdom; a loaded 2-core CI machine needs more than 5 s.
+  test: { include: ['src/**/*.spec.ts'], environment: 'node', testTimeout: 30_000 },
 });
