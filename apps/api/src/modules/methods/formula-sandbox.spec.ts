@@ -21,7 +21,7 @@ describe('formula sandbox over HTTP', () => {
       .set('Authorization', `Bearer ${token}`)
       .send({ inputs: { expressions: [`x = ${expression}`], values: { a: '2 mm', b: 3 } } });
 
-  it('refuses every hostile expression with a 400 at the expression', async () => {
+  it('refuses every hostile expression with a 400 at the expression', { timeout: 180_000 }, async () => {
     for (const expression of [...refusedFormulaExpressions, ...harmlessErrorFormulaExpressions]) {
       const response = await evaluate(expression);
       expect(response.status, expression).toBe(400);
@@ -31,7 +31,7 @@ describe('formula sandbox over HTTP', () => {
     await t.http.get('/api/health').expect(200);
   });
 
-  it('refuses a hostile batch item without failing its neighbours', async () => {
+  it('refuses a hostile batch item without failing its neighbours', { timeout: 180_000 }, async () => {
     const response = await t.http
       .post('/api/evaluate')
       .set('Authorization', `Bearer ${token}`)

@@ -132,7 +132,8 @@ describe('methods API', () => {
     expect(response.body.fields).toHaveProperty(['items']);
   });
 
-  it('runs Monte Carlo in a worker thread, reproducibly for a seed', async () => {
+  // The first worker-thread evaluation of a test app includes starting the worker (slow on a loaded CI machine).
+  it('runs Monte Carlo in a worker thread, reproducibly for a seed', { timeout: 180_000 }, async () => {
     const first = await post('/api/methods/stack-1d/evaluate', { inputs: endPlayStack }).expect(200);
     expect(first.body.outputs.worstCase).toMatchObject({ min: 2.77, max: 3.23 });
     expect(first.body.outputs.rss.max).toBeCloseTo(3.1261, 4);
