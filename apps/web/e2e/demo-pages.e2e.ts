@@ -35,7 +35,8 @@ describe('the demo library in the built app', () => {
   let token: string;
 
   beforeAll(async () => {
-    server = await startServer();
+    // Loading the demo library into a fresh database is the slow part of start-up on a busy machine.
+    server = await startServer({ timeoutMs: 115_000 });
     browser = await launchBrowser();
     const response = await fetch(`${server.baseUrl}/api/auth/sign-in`, {
       method: 'POST',
