@@ -2,6 +2,7 @@ import type { Page } from 'playwright-core';
 
 export const demo = {
   admin: { email: 'maren.holt@brackwater.example', password: 'limitbook-admin', name: 'Maren Holt' },
+  author: { email: 'idris.okafor@brackwater.example', password: 'limitbook-author', name: 'Idris Okafor' },
   reader: { email: 'tomas.wren@brackwater.example', password: 'limitbook-reader', name: 'Tomas Wren' },
 } as const;
 

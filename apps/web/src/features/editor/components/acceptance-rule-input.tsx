@@ -77,7 +77,6 @@ export function AcceptanceRuleInput({ value, outputs, unit, onChange, disabled }
       disabled={disabled}
       spellCheck={false}
       autoComplete="off"
-      classNames={{ input: 'lb-mono-input' }}
     />
   );
 }

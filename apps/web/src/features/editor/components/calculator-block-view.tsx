@@ -34,10 +34,6 @@ export function CalculatorBlockView({ node, updateAttributes, deleteNode, select
   const methods = useMethods();
   const method = methods.data?.items.find((item) => item.id === attrs.method);
   const [editing, setEditing] = useState(attrs.method === '');
-  const preview = useBlockEvaluation(
-    { method: attrs.method, inputs: attrs.defaults, unit: attrs.unit, acceptance: attrs.acceptance },
-    { enabled: !!method, debounceMs: 400 },
-  );
 
   const chooseMethod = (id: string | null) => {
     if (!id || id === attrs.method) return;
@@ -116,42 +112,12 @@ export function CalculatorBlockView({ node, updateAttributes, deleteNode, select
                 />
               </div>
             </Group>
-            {method && (
-              <>
-                <Text size="sm" c="dimmed" lineClamp={3}>
-                  {method.description}
-                </Text>
-                <section aria-label="Default inputs" className={classes.section}>
-                  <Text className={classes.sectionTitle}>Default inputs</Text>
-                  <Text size="xs" c="dimmed" mb={6}>
-                    What readers start from. The lock beside an input fixes it for readers: they see it but cannot change it.
-                  </Text>
-                  <BlockDefaultsForm
-                    method={method}
-                    unit={attrs.unit}
-                    value={attrs.defaults}
-                    locked={attrs.locked}
-                    errors={preview.error?.fields ?? {}}
-                    onChange={(defaults) => updateAttributes({ defaults, locked: keptLocks(attrs.locked, defaults) })}
-                    onLockedChange={(locked) => updateAttributes({ locked })}
-                  />
-                </section>
-                <AcceptanceRuleInput value={attrs.acceptance} outputs={method.outputs} unit={attrs.unit} onChange={(acceptance) => updateAttributes({ acceptance })} />
-              </>
-            )}
-            <TextInput
-              label="Caption"
-              description="Shown above the calculator and found by search."
-              placeholder="e.g. Port P1 to main bore wall"
-              maxLength={maxCaptionLength}
-              value={attrs.caption}
-              onChange={(event) => updateAttributes({ caption: event.currentTarget.value })}
-            />
+            {!method && captionField(attrs, updateAttributes)}
           </Stack>
         ) : (
-          attrs.caption && <Text className={classes.caption}>{attrs.caption}</Text>
+          !method && attrs.caption && <Text className={classes.caption}>{attrs.caption}</Text>
         )}
-        {method && <BlockPreview view={preview} method={method} acceptance={attrs.acceptance} />}
+        {method && <ConfiguredBlock key={method.id} method={method} attrs={attrs} editing={editing && editable} updateAttributes={updateAttributes} />}
         {!method && !editing && (
           <Text size="sm" c="dimmed">
             No method chosen yet. Open the settings to pick one.
@@ -160,6 +126,57 @@ export function CalculatorBlockView({ node, updateAttributes, deleteNode, select
         {methods.isLoading && attrs.method && <Loader size="xs" />}
       </div>
     </NodeViewWrapper>
+  );
+}
+
+function captionField(attrs: Attrs, updateAttributes: ReactNodeViewProps['updateAttributes']) {
+  return (
+    <TextInput
+      label="Caption"
+      description="Shown above the calculator and found by search."
+      placeholder="e.g. Port P1 to main bore wall"
+      maxLength={maxCaptionLength}
+      value={attrs.caption}
+      onChange={(event) => updateAttributes({ caption: event.currentTarget.value })}
+    />
+  );
+}
+
+type ConfiguredBlockProps = { method: MethodSummary; attrs: Attrs; editing: boolean; updateAttributes: ReactNodeViewProps['updateAttributes'] };
+
+/** Settings and preview of a block whose method is known; mounted per method so no request mixes two methods. */
+function ConfiguredBlock({ method, attrs, editing, updateAttributes }: ConfiguredBlockProps) {
+  const preview = useBlockEvaluation({ method: method.id, inputs: attrs.defaults, unit: attrs.unit, acceptance: attrs.acceptance }, { debounceMs: 400 });
+  return (
+    <>
+      {editing ? (
+        <Stack gap="md" mt="md">
+          <Text size="sm" c="dimmed" lineClamp={3}>
+            {method.description}
+          </Text>
+          <section aria-label="Default inputs" className={classes.section}>
+            <Text className={classes.sectionTitle}>Default inputs</Text>
+            <Text size="xs" c="dimmed" mb={6}>
+              What readers start from. The lock beside an input fixes it for readers: they see it but cannot change it.
+            </Text>
+            <BlockDefaultsForm
+              method={method}
+              unit={attrs.unit}
+              value={attrs.defaults}
+              locked={attrs.locked}
+              errors={preview.error?.fields ?? {}}
+              onChange={(defaults) => updateAttributes({ defaults, locked: keptLocks(attrs.locked, defaults) })}
+              onLockedChange={(locked) => updateAttributes({ locked })}
+            />
+          </section>
+          <AcceptanceRuleInput value={attrs.acceptance} outputs={method.outputs} unit={attrs.unit} onChange={(acceptance) => updateAttributes({ acceptance })} />
+          {captionField(attrs, updateAttributes)}
+        </Stack>
+      ) : (
+        attrs.caption && <Text className={classes.caption}>{attrs.caption}</Text>
+      )}
+      <BlockPreview view={preview} method={method} acceptance={attrs.acceptance} />
+    </>
   );
 }
 

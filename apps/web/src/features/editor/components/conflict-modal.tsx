@@ -29,12 +29,14 @@ export function ConflictModal({ conflict, onReload, onKeepMine }: Props) {
       size="lg"
     >
       <Stack gap="md">
-        <Text size="sm">{conflict?.message}</Text>
-        {latest && (
-          <Text size="sm" c="dimmed">
-            The draft on the server is version {latest.version}, titled &ldquo;{latest.title}&rdquo;, last saved {formatRelative(latest.updatedAt)}
-            {by ? ` (draft started by ${by})` : ''}.
+        {latest ? (
+          <Text size="sm">
+            While you were editing, the draft was saved again: it is now version {latest.version}, titled &ldquo;{latest.title}&rdquo;, saved{' '}
+            {formatRelative(latest.updatedAt)}
+            {by ? ` (draft started by ${by})` : ''}. Your changes are not saved yet.
           </Text>
+        ) : (
+          <Text size="sm">{conflict?.message}</Text>
         )}
         {latest && (
           <div>

@@ -3,6 +3,7 @@ import { RichTextEditor, useRichTextEditorContext } from '@mantine/tiptap';
 import { useEditorState } from '@tiptap/react';
 import { IconAlertTriangle, IconCalculator, IconMathFunction, IconPaperclip, IconPhoto, IconSum } from '@tabler/icons-react';
 import { useFileUrls } from '../hooks/use-file-urls';
+import { insertBesideSelection } from '../lib/insert-block';
 import { LinkControl } from './link-control';
 import { UploadControl } from './upload-control';
 import classes from './page-editor.module.css';
@@ -65,7 +66,7 @@ export function EditorToolbar() {
           accept={imageTypes}
           onUploaded={(file) => {
             fileUrls.set(file.id, file.signedUrl);
-            editor.chain().focus().insertContent({ type: 'image', attrs: { src: fileUrl(file.id), alt: file.name.replace(/\.[^.]+$/, '') } }).run();
+            insertBesideSelection(editor, { type: 'image', attrs: { src: fileUrl(file.id), alt: file.name.replace(/\.[^.]+$/, '') } });
           }}
         />
         <UploadControl
@@ -74,11 +75,7 @@ export function EditorToolbar() {
           accept={attachmentTypes}
           onUploaded={(file) => {
             fileUrls.set(file.id, file.signedUrl);
-            editor
-              .chain()
-              .focus()
-              .insertContent({ type: 'attachment', attrs: { fileId: file.id, name: file.name, size: file.size, contentType: file.contentType } })
-              .run();
+            insertBesideSelection(editor, { type: 'attachment', attrs: { fileId: file.id, name: file.name, size: file.size, contentType: file.contentType } });
           }}
         />
       </RichTextEditor.ControlsGroup>
@@ -86,14 +83,14 @@ export function EditorToolbar() {
         <RichTextEditor.Control
           aria-label="Inline formula"
           title="Inline formula (LaTeX)"
-          onClick={() => editor.chain().focus().insertContent({ type: 'inlineMath', attrs: { latex: '' } }).run()}
+          onClick={() => insertBesideSelection(editor, { type: 'inlineMath', attrs: { latex: '' } })}
         >
           <IconMathFunction size={16} stroke={1.6} />
         </RichTextEditor.Control>
         <RichTextEditor.Control
           aria-label="Block formula"
           title="Block formula (LaTeX)"
-          onClick={() => editor.chain().focus().insertContent({ type: 'blockMath', attrs: { latex: '' } }).run()}
+          onClick={() => insertBesideSelection(editor, { type: 'blockMath', attrs: { latex: '' } })}
         >
           <IconSum size={16} stroke={1.6} />
         </RichTextEditor.Control>
@@ -104,7 +101,7 @@ export function EditorToolbar() {
           onClick={() => {
             const chain = editor.chain().focus();
             if (!editor.isActive('caution') && !chain.wrapIn('caution', { level: 'caution' }).run()) {
-              editor.chain().focus().insertContent({ type: 'caution', attrs: { level: 'caution' }, content: [{ type: 'paragraph' }] }).run();
+              insertBesideSelection(editor, { type: 'caution', attrs: { level: 'caution' }, content: [{ type: 'paragraph' }] });
             } else if (editor.isActive('caution')) {
               editor.chain().focus().lift('caution').run();
             }
@@ -118,7 +115,7 @@ export function EditorToolbar() {
           aria-label="Insert calculator"
           title="Insert calculator"
           className={classes.calculatorControl}
-          onClick={() => editor.chain().focus().insertCalculatorBlock({ method: '' }).run()}
+          onClick={() => insertBesideSelection(editor, { type: 'calculatorBlock', attrs: { method: '' } })}
         >
           <IconCalculator size={16} stroke={1.6} />
           <span>Calculator</span>
