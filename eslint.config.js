@@ -21,6 +21,7 @@ export default tseslint.config(
   },
   {
     files: ['libs/contracts/src/**/*.ts'],
+    ignores: ['libs/contracts/src/**/*.spec.ts'],
     rules: {
       'no-restricted-imports': ['error', { patterns: [{ regex: '^(?!zod$|\\.{1,2}/)', message: 'libs/contracts depends on zod only.' }] }],
     },
