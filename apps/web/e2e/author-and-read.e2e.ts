@@ -105,7 +105,7 @@ describe('authoring a standard and reading it', () => {
       await block.locator('[data-verdict="pass"]').waitFor();
       await block.evaluate((element) => {
         element.scrollIntoView({ block: 'start' });
-        window.scrollBy(0, -130);
+        window.scrollBy(0, -175);
       });
       await shot(page, '2-calculator-edit-mode');
       await noXss(page);

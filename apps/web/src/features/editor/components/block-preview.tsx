@@ -1,4 +1,5 @@
 import { Alert, Button, Group, Loader, Text } from '@mantine/core';
+import { useState } from 'react';
 import type { AcceptanceRule, MethodSummary } from '@limitbook/contracts';
 import { ResultPanel } from '@/components/calculator/result-panel';
 import type { EvaluationView } from '@/components/calculator/lib/evaluation-state';
@@ -8,6 +9,8 @@ type Props = { view: EvaluationView & { retry: () => void }; method: MethodSumma
 
 /** What readers will see first: the defaults evaluated by the server. */
 export function BlockPreview({ view, method, acceptance }: Props) {
+  // The headline and verdict are what an author checks while editing; the tables and chart on request.
+  const [full, setFull] = useState(false);
   return (
     <section className={classes.preview} aria-label="Preview with the default inputs">
       <Group justify="space-between" mb={6}>
@@ -29,7 +32,14 @@ export function BlockPreview({ view, method, acceptance }: Props) {
         </Alert>
       )}
       {view.result ? (
-        <ResultPanel result={view.result} method={method} acceptance={acceptance} stale={view.stale} hideCautions />
+        <>
+          <div className={classes.previewBody} data-full={full || undefined}>
+            <ResultPanel result={view.result} method={method} acceptance={acceptance} stale={view.stale} hideCautions />
+          </div>
+          <Button variant="subtle" size="compact-sm" mt={4} onClick={() => setFull((open) => !open)} aria-expanded={full}>
+            {full ? 'Show less' : 'Show the full result'}
+          </Button>
+        </>
       ) : view.state === 'loading' ? (
         <Text size="sm" c="dimmed">
           Evaluating on the server…

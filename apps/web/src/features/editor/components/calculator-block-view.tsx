@@ -57,7 +57,11 @@ export function CalculatorBlockView({ node, updateAttributes, deleteNode, select
           <Text className={classes.title}>{heading}</Text>
         </Stack>
         <Group gap={6} wrap="nowrap" className={classes.badges}>
-          {attrs.method && <Badge color="gray">{attrs.unit}</Badge>}
+          {attrs.method && (
+            <Badge color="gray" tt="none">
+              {attrs.unit === 'in' ? 'inch' : 'mm'}
+            </Badge>
+          )}
           {attrs.locked.length > 0 && (
             <Badge color="ink" leftSection={<IconLock size={11} aria-hidden />}>
               {attrs.locked.length} locked

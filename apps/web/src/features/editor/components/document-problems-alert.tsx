@@ -1,7 +1,7 @@
 import { Alert, Anchor, List, Text } from '@mantine/core';
 import type { Editor } from '@tiptap/react';
 import { IconAlertCircle } from '@tabler/icons-react';
-import { useMemo } from 'react';
+import { useEffect, useMemo, useRef } from 'react';
 import { describeDocumentProblems } from '../lib/document-problems';
 
 type Props = { editor: Editor; refused: { message: string; fields: Record<string, string> } };
@@ -9,6 +9,11 @@ type Props = { editor: Editor; refused: { message: string; fields: Record<string
 /** The server's reasons for refusing a save, each with a way to jump to the part concerned. */
 export function DocumentProblemsAlert({ editor, refused }: Props) {
   const problems = useMemo(() => describeDocumentProblems(editor.state.doc, refused.fields), [editor, refused]);
+  const ref = useRef<HTMLDivElement>(null);
+  // The author may be far down the page when the save is refused: bring the reasons into view.
+  useEffect(() => {
+    ref.current?.scrollIntoView({ block: 'center' });
+  }, [refused]);
   const others = Object.entries(refused.fields).filter(([field]) => field !== 'title' && !field.startsWith('document'));
 
   const show = (position: number) => {
@@ -18,7 +23,7 @@ export function DocumentProblemsAlert({ editor, refused }: Props) {
   };
 
   return (
-    <Alert color="redline" icon={<IconAlertCircle size={18} />} title="The draft was not saved" mb="md" role="alert">
+    <Alert ref={ref} color="redline" icon={<IconAlertCircle size={18} />} title="The draft was not saved" mb="md" role="alert">
       <Text size="sm" mb={problems.length + others.length > 0 ? 6 : 0}>
         {refused.message}
       </Text>
