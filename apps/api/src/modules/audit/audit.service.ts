@@ -3,7 +3,7 @@ import { type AuditEvent, type AuditList, type AuditQuery } from '@limitbook/con
 import { type Executor } from '../../database/database.js';
 import { type AuditEventRow } from '../../database/schema/index.js';
 import { type AuditFilter, AuditRepository } from './audit.repository.js';
-import { toCsv } from './csv.js';
+import { toCsv } from '../../common/csv/csv.js';
 
 export interface AuditActor {
   id: string;
