@@ -19,3 +19,5 @@ export * from './library/collections.js';
 export * from './library/pages.js';
 export * from './library/files.js';
 export * from './library/search.js';
+export * from './records/records.js';
+export * from './records/impact.js';
