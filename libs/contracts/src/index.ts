@@ -19,5 +19,6 @@ export * from './library/collections.js';
 export * from './library/pages.js';
 export * from './library/files.js';
 export * from './library/search.js';
+export * from './library/lifecycle.js';
 export * from './records/records.js';
 export * from './records/impact.js';

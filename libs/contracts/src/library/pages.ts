@@ -39,17 +39,31 @@ export const pageDocumentSchema = z.looseObject({
 });
 export type PageDocument = z.infer<typeof pageDocumentSchema>;
 
-/** `published` becomes the released states when document control lands. */
-export const revisionStates = ['draft', 'published'] as const;
+/** Draft → in review → released → superseded; the last two never change again. */
+export const revisionStates = ['draft', 'in_review', 'released', 'superseded'] as const;
 export const revisionStateSchema = z.enum(revisionStates);
 export type RevisionState = z.infer<typeof revisionStateSchema>;
 
 export const personRefSchema = z.object({ id: z.string(), name: z.string(), email: z.string() });
 export type PersonRef = z.infer<typeof personRefSchema>;
 
+/** Who asked for review, whom, with what note; and the reviewer's comment once they answered. */
+export const revisionReviewSchema = z.object({
+  submittedAt: z.string().nullable(),
+  submittedBy: personRefSchema.nullable(),
+  reviewers: z.array(personRefSchema),
+  note: z.string().nullable(),
+  comment: z.string().nullable(),
+});
+export type RevisionReview = z.infer<typeof revisionReviewSchema>;
+
 export const pageRevisionSchema = z.object({
   id: z.string(),
   state: revisionStateSchema,
+  /** 1, 2, 3… in order of creation. */
+  sequence: z.number().int(),
+  /** Given at release (A, B … Y, AA …); null while draft or in review. */
+  revisionLetter: z.string().nullable(),
   title: z.string(),
   document: pageDocumentSchema,
   /** Goes up by one on every save of a draft; send it back as `baseVersion`. */
@@ -57,19 +71,30 @@ export const pageRevisionSchema = z.object({
   createdAt: z.string(),
   updatedAt: z.string(),
   createdBy: personRefSchema.nullable(),
+  /** Release date (null until released). */
   publishedAt: z.string().nullable(),
+  /** The approver who released it. */
   publishedBy: personRefSchema.nullable(),
+  supersededAt: z.string().nullable(),
+  review: revisionReviewSchema,
+  /** Set on a draft an admin restored from an older revision. */
+  restoredFromId: z.string().nullable(),
 });
 export type PageRevision = z.infer<typeof pageRevisionSchema>;
 
 export const revisionSummarySchema = z.object({
   id: z.string(),
+  state: revisionStateSchema,
+  revisionLetter: z.string().nullable(),
   title: z.string(),
   version: z.number().int(),
   updatedAt: z.string(),
   publishedAt: z.string().nullable(),
 });
 export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
+
+export const pageObsoleteSchema = z.object({ at: z.string(), by: personRefSchema.nullable(), reason: z.string() });
+export type PageObsolete = z.infer<typeof pageObsoleteSchema>;
 
 export const pageSchema = z.object({
   id: z.string(),
@@ -79,11 +104,18 @@ export const pageSchema = z.object({
   tags: z.array(z.string()),
   createdAt: z.string(),
   updatedAt: z.string(),
-  /** The revision readers see; null until the first publication. */
+  /** The latest released revision, the one readers see; null until the first release. */
   published: revisionSummarySchema.nullable(),
-  /** The draft being edited; always null for readers and reviewers. */
+  /**
+   * The open revision: a draft (authors and admins) or one in review (authors, admins and
+   * reviewers); null for everyone else.
+   */
   draft: revisionSummarySchema.nullable(),
-  /** The revision asked for with `view` (published by default, the draft if there is no published one). */
+  /** Set while the page is obsolete: show a banner. */
+  obsolete: pageObsoleteSchema.nullable(),
+  /** Whether the caller watches the page (mail on each release). */
+  watching: z.boolean(),
+  /** The revision asked for with `view` (the released one by default, else the open one). */
   revision: pageRevisionSchema,
   /**
    * Signed addresses of the uploaded files the shown revision uses (image `src` and
@@ -104,8 +136,11 @@ export const pageSummarySchema = z.object({
   tags: z.array(z.string()),
   updatedAt: z.string(),
   publishedAt: z.string().nullable(),
+  /** Letter of the latest release; null before the first. */
+  revisionLetter: z.string().nullable(),
   /** Whether a draft is open; always false for readers and reviewers. */
   hasDraft: z.boolean(),
+  obsolete: z.boolean(),
 });
 export type PageSummary = z.infer<typeof pageSummarySchema>;
 
@@ -114,11 +149,19 @@ export type PageList = z.infer<typeof pageListSchema>;
 
 export const pageSorts = ['number', 'recent'] as const;
 
+/** A query-string switch: `true` or `false`, off when left out. */
+export const queryFlagSchema = z
+  .enum(['true', 'false'], { message: 'Use true or false' })
+  .optional()
+  .transform((value) => value === 'true');
+
 export const pageListQuerySchema = pageQuerySchema.extend({
   collection: collectionKeySchema.optional(),
   tag: pageTagSchema.optional(),
   /** `number` orders by document number; `recent` by last change, newest first. */
   sort: z.enum(pageSorts, { message: `Sort by ${pageSorts.join(' or ')}` }).default('number'),
+  /** `true` lists obsolete pages too; they are left out by default. */
+  includeObsolete: queryFlagSchema,
 });
 export type PageListQuery = z.infer<typeof pageListQuerySchema>;
 
@@ -128,6 +171,7 @@ export const pageRefParamsSchema = z.strictObject({
 });
 
 export const pageViewQuerySchema = z.strictObject({
+  /** `published`: the latest release; `draft`: the open revision (draft or in review). */
   view: z.enum(['published', 'draft'], { message: 'View is published or draft' }).optional(),
 });
 export type PageViewQuery = z.infer<typeof pageViewQuerySchema>;
@@ -163,8 +207,6 @@ export const saveDraftRequestSchema = z.strictObject({
 });
 export type SaveDraftRequest = z.infer<typeof saveDraftRequestSchema>;
 
-export const publishDraftRequestSchema = z.strictObject({ baseVersion: baseVersionSchema });
-export type PublishDraftRequest = z.infer<typeof publishDraftRequestSchema>;
 
 /** The 409 answer to a stale save: who saved the draft last, when, and its version now. */
 export const draftConflictBodySchema = errorBodySchema.extend({

@@ -7,3 +7,4 @@ export * from './collections.js';
 export * from './pages.js';
 export * from './page-revisions.js';
 export * from './stored-files.js';
+export * from './page-watches.js';

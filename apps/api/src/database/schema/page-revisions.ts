@@ -9,7 +9,8 @@ const tsvector = customType<{ data: string }>({ dataType: () => 'tsvector' });
 
 /**
  * One revision of a page: its title and body as ProseMirror JSON. A page has at most one
- * draft; saves of a draft bump `version` (optimistic locking). The search columns are
+ * open revision (draft or in review); saves of a draft bump `version` (optimistic locking).
+ * Released and superseded revisions are never written again, apart from being superseded. The search columns are
  * written together with the body by the repository, on every save.
  */
 export const pageRevisions = pgTable(
@@ -35,14 +36,29 @@ export const pageRevisions = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedBy: uuid('updated_by').references(() => users.id, { onDelete: 'set null' }),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    /** On a released revision: its approver and release date. */
     publishedBy: uuid('published_by').references(() => users.id, { onDelete: 'set null' }),
     publishedAt: timestamp('published_at', { withTimezone: true }),
+    /** Given at release (A, B, C…); null while draft or in review. */
+    revisionLetter: text('revision_letter'),
+    /** The last submission for review: who, when, whom they asked, and their note. */
+    submittedBy: uuid('submitted_by').references(() => users.id, { onDelete: 'set null' }),
+    submittedAt: timestamp('submitted_at', { withTimezone: true }),
+    reviewerIds: uuid('reviewer_ids').array().notNull().default(sql`'{}'::uuid[]`),
+    submitNote: text('submit_note'),
+    /** The reviewer's last word: the approval comment, or why it was sent back. */
+    reviewComment: text('review_comment'),
+    supersededAt: timestamp('superseded_at', { withTimezone: true }),
+    /** The revision this draft was restored from, when an admin restored an older one. */
+    restoredFromId: uuid('restored_from_id'),
   },
   (table) => [
     unique('page_revisions_page_sequence_unique').on(table.pageId, table.sequence),
-    uniqueIndex('page_revisions_one_draft_idx').on(table.pageId).where(sql`${table.state} = 'draft'`),
+    // One open revision per page: a draft, or the same revision while in review.
+    uniqueIndex('page_revisions_one_draft_idx').on(table.pageId).where(sql`${table.state} in ('draft', 'in_review')`),
+    unique('page_revisions_page_letter_unique').on(table.pageId, table.revisionLetter),
     index('page_revisions_search_idx').using('gin', table.searchVector),
-    check('page_revisions_state_check', sql`${table.state} in ('draft', 'published')`),
+    check('page_revisions_state_check', sql`${table.state} in ('draft', 'in_review', 'released', 'superseded')`),
     check('page_revisions_version_check', sql`${table.version} >= 1`),
   ],
 );

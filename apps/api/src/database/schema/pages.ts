@@ -6,7 +6,8 @@ import { users } from './users.js';
 
 /**
  * A standard: its identity and filing (document number, collection, owner, tags). What it
- * says lives in its revisions; `currentPublishedRevisionId` is the one readers see.
+ * says lives in its revisions; `currentPublishedRevisionId` is the latest released one, which
+ * readers see.
  */
 export const pages = pgTable(
   'pages',
@@ -20,6 +21,10 @@ export const pages = pgTable(
     ownerId: uuid('owner_id').references(() => users.id, { onDelete: 'set null' }),
     tags: text('tags').array().notNull().default(sql`'{}'::text[]`),
     currentPublishedRevisionId: uuid('current_published_revision_id').references((): AnyPgColumn => pageRevisions.id, { onDelete: 'set null' }),
+    /** Set while the page is obsolete: hidden from lists and search, still readable. */
+    obsoleteAt: timestamp('obsolete_at', { withTimezone: true }),
+    obsoleteBy: uuid('obsolete_by').references(() => users.id, { onDelete: 'set null' }),
+    obsoleteReason: text('obsolete_reason'),
     createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),

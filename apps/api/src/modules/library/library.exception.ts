@@ -12,7 +12,17 @@ export type LibraryErrorReason =
   | 'draft-not-found'
   | 'draft-exists'
   | 'drafts-hidden'
-  | 'not-published';
+  | 'not-published'
+  | 'in-review'
+  | 'not-in-review'
+  | 'released-immutable'
+  | 'own-approval'
+  | 'revision-not-found'
+  | 'restore-open-revision'
+  | 'restore-not-released'
+  | 'already-obsolete'
+  | 'not-obsolete'
+  | 'review-stale';
 
 const byReason: Record<LibraryErrorReason, () => AppException> = {
   'collection-not-found': () => new AppException(404, 'NOT_FOUND', 'No collection with this id.'),
@@ -23,10 +33,25 @@ const byReason: Record<LibraryErrorReason, () => AppException> = {
   'document-number-taken': () =>
     new AppException(409, 'CONFLICT', 'Another page already has this document number.', { documentNumber: 'Already used by another page' }),
   'owner-not-found': () => new AppException(400, 'VALIDATION_FAILED', 'The owner must be a user of Limitbook.', { ownerId: 'No user with this id' }),
-  'draft-not-found': () => new AppException(404, 'NOT_FOUND', 'This page has no draft. Start one from the published revision first.'),
+  'draft-not-found': () => new AppException(404, 'NOT_FOUND', 'This page has no draft. Start one from the released revision first.'),
   'draft-exists': () => new AppException(409, 'CONFLICT', 'This page already has a draft. Open it instead of starting another.'),
-  'not-published': () => new AppException(404, 'NOT_FOUND', 'This page has not been published yet.'),
-  'drafts-hidden': () => new AppException(403, 'FORBIDDEN', 'Drafts are open to authors and admins only.'),
+  'not-published': () => new AppException(404, 'NOT_FOUND', 'This page has no released revision yet.'),
+  'drafts-hidden': () => new AppException(403, 'FORBIDDEN', 'Drafts are open to authors and admins only; revisions in review to reviewers too.'),
+  'in-review': () => new AppException(409, 'CONFLICT', 'This revision is in review and cannot be edited. Withdraw it to draft first, or wait for the reviewer.'),
+  'not-in-review': () => new AppException(409, 'CONFLICT', 'This page has no revision in review.'),
+  'released-immutable': () =>
+    new AppException(409, 'CONFLICT', 'Released and superseded revisions cannot be changed. Start a new draft of the next revision instead.'),
+  'own-approval': () => new AppException(403, 'FORBIDDEN', 'You worked on this revision, so another reviewer or admin has to approve it.'),
+  'revision-not-found': () => new AppException(404, 'NOT_FOUND', 'This page has no revision with this id.'),
+  'restore-open-revision': () =>
+    new AppException(409, 'CONFLICT', 'This page already has a draft or a revision in review. Finish or discard it before restoring an older revision.'),
+  'restore-not-released': () => new AppException(409, 'CONFLICT', 'Only released or superseded revisions can be restored.'),
+  'already-obsolete': () => new AppException(409, 'CONFLICT', 'This page is already obsolete.'),
+  'review-stale': () =>
+    new AppException(409, 'CONFLICT', 'The revision changed since you opened it (it was withdrawn, edited and submitted again). Reload it and review the current text.', {
+      baseVersion: 'Not the version in review',
+    }),
+  'not-obsolete': () => new AppException(409, 'CONFLICT', 'This page is not obsolete.'),
 };
 
 /** The 409 of a stale draft save, telling the editor which version is current and who saved it. */
@@ -47,6 +72,10 @@ export class LibraryException {
   /** For expressions: `found ?? LibraryException.throw('page-not-found')`. */
   static throw(reason: LibraryErrorReason): never {
     throw byReason[reason]();
+  }
+
+  static invalidReviewers(message: string): AppException {
+    return new AppException(400, 'VALIDATION_FAILED', message, { reviewerIds: message });
   }
 
   static invalidDocument(fields: Record<string, string>): AppException {

@@ -7,14 +7,12 @@ import {
   pageRefParamsSchema,
   pageSchema,
   pageViewQuerySchema,
-  publishDraftRequestSchema,
   saveDraftRequestSchema,
   tagListSchema,
   updatePageRequestSchema,
   type CreatePageRequest,
   type PageListQuery,
   type PageViewQuery,
-  type PublishDraftRequest,
   type SaveDraftRequest,
   type UpdatePageRequest,
 } from '@limitbook/contracts';
@@ -32,7 +30,7 @@ export class PagesController {
   @Get()
   @Roles(...AnySignedIn)
   @ApiContract({
-    summary: 'List pages, filtered by collection key and tag; readers see published pages only',
+    summary: 'List pages, filtered by collection key and tag; readers see released pages only; obsolete pages only with `includeObsolete=true`',
     response: pageListSchema,
     tag: 'Library',
   })
@@ -50,7 +48,7 @@ export class PagesController {
   @Get(':ref')
   @Roles(...AnySignedIn)
   @ApiContract({
-    summary: 'One page by id or document number: the published revision, or with `view=draft` the draft (authors and admins)',
+    summary: 'One page by id or document number: the latest released revision, or with `view=draft` the open revision (a draft for authors and admins, one in review for reviewers too)',
     response: pageSchema,
     tag: 'Library',
   })
@@ -67,7 +65,7 @@ export class PagesController {
 
   @Post(':id/draft')
   @Roles(...editorRoles)
-  @ApiContract({ summary: 'Start a draft as a copy of the published revision', response: pageSchema, tag: 'Library' })
+  @ApiContract({ summary: 'Start a draft of the next revision as a copy of the released one', response: pageSchema, tag: 'Library' })
   startDraft(@CurrentUser() actor: AuthUser, @ValidParams(idParamSchema) params: { id: string }) {
     return this.pages.startDraft(actor, params.id);
   }
@@ -87,17 +85,9 @@ export class PagesController {
   @Delete(':id/draft')
   @HttpCode(204)
   @Roles(...editorRoles)
-  @ApiContract({ summary: 'Discard the draft (a page never published goes with it)', status: 204, tag: 'Library' })
+  @ApiContract({ summary: 'Discard the draft (a page never released goes with it)', status: 204, tag: 'Library' })
   async deleteDraft(@CurrentUser() actor: AuthUser, @ValidParams(idParamSchema) params: { id: string }) {
     await this.pages.deleteDraft(actor, params.id);
-  }
-
-  @Post(':id/publish')
-  @HttpCode(200)
-  @Roles(...editorRoles)
-  @ApiContract({ summary: 'Publish the draft at `baseVersion`; it becomes what readers see', response: pageSchema, tag: 'Library' })
-  publish(@CurrentUser() actor: AuthUser, @ValidParams(idParamSchema) params: { id: string }, @ValidBody(publishDraftRequestSchema) body: PublishDraftRequest) {
-    return this.pages.publish(actor, params.id, body.baseVersion);
   }
 }
 

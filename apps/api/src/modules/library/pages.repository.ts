@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { type PersonRef, type RevisionState } from '@limitbook/contracts';
-import { and, arrayContains, asc, desc, eq, inArray, isNotNull, type SQL, sql } from 'drizzle-orm';
+import { type PersonRef, type RevisionState, type Role } from '@limitbook/contracts';
+import { and, arrayContains, asc, desc, eq, inArray, isNotNull, isNull, type SQL, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import { DRIZZLE } from '../../database/database.module.js';
 import { type Database, type Executor } from '../../database/database.js';
@@ -12,6 +12,7 @@ import {
   type PageRevisionRow,
   type PageRow,
   pages,
+  pageWatches,
   users,
 } from '../../database/schema/index.js';
 import { type PageContent } from './page-content.js';
@@ -26,6 +27,7 @@ export interface PageListRow extends PageWithCollection {
   title: string;
   publishedAt: Date | null;
   hasDraft: boolean;
+  revisionLetter: string | null;
 }
 
 export interface PageListFilter {
@@ -33,6 +35,7 @@ export interface PageListFilter {
   tag?: string;
   /** Readers: only pages with a published revision, ordered by publication. */
   publishedOnly: boolean;
+  includeObsolete: boolean;
   sort: 'number' | 'recent';
   limit: number;
   offset: number;
@@ -45,6 +48,9 @@ export interface NewRevision {
   title: string;
   content: PageContent;
   userId: string | null;
+  /** For a revision inserted released (demo content): its letter. */
+  revisionLetter?: string;
+  restoredFromId?: string;
 }
 
 const publishedRevision = alias(pageRevisions, 'published_revision');
@@ -92,6 +98,7 @@ export class PagesRepository {
   async listPages(filter: PageListFilter): Promise<{ rows: PageListRow[]; total: number }> {
     const conditions: SQL[] = [];
     if (filter.publishedOnly) conditions.push(isNotNull(pages.currentPublishedRevisionId));
+    if (!filter.includeObsolete) conditions.push(isNull(pages.obsoleteAt));
     if (filter.collectionKey) conditions.push(eq(collections.key, filter.collectionKey));
     if (filter.tag) conditions.push(arrayContains(pages.tags, [filter.tag]));
     const where = conditions.length > 0 ? and(...conditions) : undefined;
@@ -108,12 +115,13 @@ export class PagesRepository {
           collection: collections,
           title: sql<string>`coalesce(${publishedRevision.title}, ${draftRevision.title}, '')`,
           publishedAt: publishedRevision.publishedAt,
+          revisionLetter: publishedRevision.revisionLetter,
           hasDraft: sql<boolean>`${draftRevision.id} is not null`,
         })
         .from(pages)
         .innerJoin(collections, eq(collections.id, pages.collectionId))
         .leftJoin(publishedRevision, eq(publishedRevision.id, pages.currentPublishedRevisionId))
-        .leftJoin(draftRevision, and(eq(draftRevision.pageId, pages.id), eq(draftRevision.state, 'draft')))
+        .leftJoin(draftRevision, and(eq(draftRevision.pageId, pages.id), inArray(draftRevision.state, ['draft', 'in_review'])))
         .where(where)
         .orderBy(...order)
         .limit(filter.limit)
@@ -133,7 +141,7 @@ export class PagesRepository {
     return this.db
       .select({ tag, count: sql<number>`cast(count(*) as int)` })
       .from(sql`${pages}, unnest(${pages.tags}) as tag`)
-      .where(publishedOnly ? isNotNull(pages.currentPublishedRevisionId) : undefined)
+      .where(and(isNull(pages.obsoleteAt), publishedOnly ? isNotNull(pages.currentPublishedRevisionId) : undefined))
       .groupBy(tag)
       .orderBy(asc(tag));
   }
@@ -149,7 +157,9 @@ export class PagesRepository {
     }
   }
 
-  async updatePage(id: string, changes: Partial<Pick<PageRow, 'collectionId' | 'tags' | 'ownerId' | 'currentPublishedRevisionId'>>, executor: Executor = this.db): Promise<PageRow> {
+  async updatePage(
+    id: string,
+    changes: Partial<Pick<PageRow, 'collectionId' | 'tags' | 'ownerId' | 'currentPublishedRevisionId' | 'obsoleteAt' | 'obsoleteBy' | 'obsoleteReason'>>, executor: Executor = this.db): Promise<PageRow> {
     const [row] = await executor
       .update(pages)
       .set({ ...changes, updatedAt: new Date() })
@@ -167,12 +177,94 @@ export class PagesRepository {
     return row;
   }
 
+  /** The open revision: the draft, or the same revision while it is in review. */
   async findDraft(pageId: string, executor: Executor = this.db): Promise<PageRevisionRow | undefined> {
     const [row] = await executor
       .select()
       .from(pageRevisions)
-      .where(and(eq(pageRevisions.pageId, pageId), eq(pageRevisions.state, 'draft')));
+      .where(and(eq(pageRevisions.pageId, pageId), inArray(pageRevisions.state, ['draft', 'in_review'])));
     return row;
+  }
+
+  /** Newest first. */
+  async listRevisions(pageId: string, states: RevisionState[], executor: Executor = this.db): Promise<PageRevisionRow[]> {
+    return executor
+      .select()
+      .from(pageRevisions)
+      .where(and(eq(pageRevisions.pageId, pageId), inArray(pageRevisions.state, states)))
+      .orderBy(desc(pageRevisions.sequence));
+  }
+
+  /**
+   * Moves a revision from one state to the next, only if it is still in `from`: a revision that
+   * moved meanwhile (or a released one) is never touched. Undefined when nothing matched.
+   */
+  async transition(
+    revisionId: string,
+    from: RevisionState,
+    changes: Partial<
+      Pick<
+        PageRevisionRow,
+        'state' | 'revisionLetter' | 'publishedAt' | 'publishedBy' | 'submittedAt' | 'submittedBy' | 'reviewerIds' | 'submitNote' | 'reviewComment' | 'supersededAt'
+      >
+    >,
+    executor: Executor = this.db,
+  ): Promise<PageRevisionRow | undefined> {
+    const [row] = await executor
+      .update(pageRevisions)
+      .set({ ...changes, updatedAt: new Date() })
+      .where(and(eq(pageRevisions.id, revisionId), eq(pageRevisions.state, from)))
+      .returning();
+    return row;
+  }
+
+  async usersWithRoles(ids: string[], executor: Executor = this.db): Promise<{ id: string; name: string; email: string; role: Role; status: string }[]> {
+    if (ids.length === 0) return [];
+    return executor.select({ id: users.id, name: users.name, email: users.email, role: users.role, status: users.status }).from(users).where(inArray(users.id, ids));
+  }
+
+  async watch(pageId: string, userId: string): Promise<void> {
+    await this.db.insert(pageWatches).values({ pageId, userId }).onConflictDoNothing();
+  }
+
+  async unwatch(pageId: string, userId: string): Promise<void> {
+    await this.db.delete(pageWatches).where(and(eq(pageWatches.pageId, pageId), eq(pageWatches.userId, userId)));
+  }
+
+  async isWatching(pageId: string, userId: string): Promise<boolean> {
+    const [row] = await this.db
+      .select({ pageId: pageWatches.pageId })
+      .from(pageWatches)
+      .where(and(eq(pageWatches.pageId, pageId), eq(pageWatches.userId, userId)));
+    return row !== undefined;
+  }
+
+  /** Active watchers of a page, for release notices. */
+  async watchers(pageId: string, executor: Executor = this.db): Promise<{ id: string; name: string; email: string }[]> {
+    return executor
+      .select({ id: users.id, name: users.name, email: users.email })
+      .from(pageWatches)
+      .innerJoin(users, eq(users.id, pageWatches.userId))
+      .where(and(eq(pageWatches.pageId, pageId), eq(users.status, 'active')));
+  }
+
+  async watchedPages(userId: string) {
+    return this.db
+      .select({
+        page: pages,
+        collection: collections,
+        watchedAt: pageWatches.createdAt,
+        title: sql<string>`coalesce(${publishedRevision.title}, ${draftRevision.title}, '')`,
+        revisionLetter: publishedRevision.revisionLetter,
+        releasedAt: publishedRevision.publishedAt,
+      })
+      .from(pageWatches)
+      .innerJoin(pages, eq(pages.id, pageWatches.pageId))
+      .innerJoin(collections, eq(collections.id, pages.collectionId))
+      .leftJoin(publishedRevision, eq(publishedRevision.id, pages.currentPublishedRevisionId))
+      .leftJoin(draftRevision, and(eq(draftRevision.pageId, pages.id), inArray(draftRevision.state, ['draft', 'in_review'])))
+      .where(eq(pageWatches.userId, userId))
+      .orderBy(asc(pages.documentNumber));
   }
 
   /** Undefined when the page already has a draft (one draft per page, by a unique index). */
@@ -191,7 +283,8 @@ export class PagesRepository {
           updatedBy: revision.userId,
           createdAt: now,
           updatedAt: now,
-          ...(revision.state === 'published' ? { publishedAt: now, publishedBy: revision.userId } : {}),
+          restoredFromId: revision.restoredFromId ?? null,
+          ...(revision.state === 'released' ? { publishedAt: now, publishedBy: revision.userId, revisionLetter: revision.revisionLetter ?? null } : {}),
         })
         .returning();
       return row;
@@ -219,17 +312,6 @@ export class PagesRepository {
         updatedBy: change.userId,
         updatedAt: new Date(),
       })
-      .where(and(eq(pageRevisions.id, draftId), eq(pageRevisions.state, 'draft'), eq(pageRevisions.version, baseVersion)))
-      .returning();
-    return row;
-  }
-
-  /** The draft at `baseVersion` becomes published; undefined when it moved on meanwhile. */
-  async publishDraft(draftId: string, baseVersion: number, userId: string | null, executor: Executor = this.db): Promise<PageRevisionRow | undefined> {
-    const now = new Date();
-    const [row] = await executor
-      .update(pageRevisions)
-      .set({ state: 'published', publishedAt: now, publishedBy: userId, updatedAt: now })
       .where(and(eq(pageRevisions.id, draftId), eq(pageRevisions.state, 'draft'), eq(pageRevisions.version, baseVersion)))
       .returning();
     return row;

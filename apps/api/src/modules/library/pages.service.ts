@@ -15,8 +15,8 @@ import { type PageRevisionRow } from '../../database/schema/index.js';
 import { AuditService } from '../audit/audit.service.js';
 import { FilesService } from '../files/files.service.js';
 import { CollectionsRepository } from './collections.repository.js';
-import { toPage, toPageSummary } from './dto/library.dto.js';
-import { seesDrafts } from './library-access.js';
+import { revisionPeopleIds, toPage, toPageSummary } from './dto/library.dto.js';
+import { seesDrafts, seesReviews } from './library-access.js';
 import { LibraryException } from './library.exception.js';
 import { emptyDocument, type PageContent, preparePageContent, referencedFileIds } from './page-content.js';
 import { type PageWithCollection, PagesRepository } from './pages.repository.js';
@@ -48,6 +48,7 @@ export class PagesService {
       collectionKey: query.collection,
       tag: query.tag,
       publishedOnly: !drafts,
+      includeObsolete: query.includeObsolete,
       sort: query.sort,
       limit: query.limit,
       offset: query.offset,
@@ -60,17 +61,22 @@ export class PagesService {
     return { items: await this.repository.listTags(!seesDrafts(user.role)) };
   }
 
-  /** Readers see the published revision only; a page never published does not exist for them. */
-  async get(user: AuthUser, ref: string, view: PageViewQuery['view']): Promise<Page> {
+  /**
+   * Readers see the latest released revision only; a page never released does not exist for
+   * them. Reviewers also see a revision in review, authors and admins the draft too.
+   */
+  async get(user: AuthUser, ref: string, view: PageViewQuery['view'], showOpen = false): Promise<Page> {
     const found = await this.repository.findPage(uuidPattern.test(ref) ? { id: ref } : { documentNumber: ref.toUpperCase() });
     if (!found) throw LibraryException.of('page-not-found');
-    const drafts = seesDrafts(user.role);
-    if (view === 'draft' && !drafts) throw LibraryException.of('drafts-hidden');
+    if (view === 'draft' && !showOpen && !seesReviews(user.role)) throw LibraryException.of('drafts-hidden');
     const published = found.page.currentPublishedRevisionId ? await this.repository.findRevision(found.page.currentPublishedRevisionId) : undefined;
-    const draft = drafts ? await this.repository.findDraft(found.page.id) : undefined;
-    if (!drafts && !published) throw LibraryException.of('page-not-found');
+    const open = await this.repository.findDraft(found.page.id);
+    // `showOpen`: the answer to a reviewer's own decision shows the revision they decided on.
+    const draft = open && (showOpen || seesDrafts(user.role) || (open.state === 'in_review' && seesReviews(user.role))) ? open : undefined;
+    if (view === 'draft' && !draft) throw LibraryException.of(open ? 'drafts-hidden' : 'draft-not-found');
+    if (!published && !draft) throw LibraryException.of('page-not-found');
     let shown: PageRevisionRow | undefined;
-    if (view === 'draft') shown = draft ?? LibraryException.throw('draft-not-found');
+    if (view === 'draft') shown = draft!;
     else if (view === 'published') shown = published ?? LibraryException.throw('not-published');
     else shown = published ?? draft ?? LibraryException.throw('page-not-found');
     return this.view(user, found, shown, published, draft);
@@ -107,7 +113,7 @@ export class PagesService {
     return this.get(actor, id, undefined);
   }
 
-  /** A new draft starts as a copy of the published revision. */
+  /** A new draft of the next revision starts as a copy of the released one, which stays live. */
   async startDraft(actor: AuthUser, id: string): Promise<Page> {
     await this.repository.transaction(async (tx) => {
       const page = await this.repository.lockPage(id, tx);
@@ -130,9 +136,11 @@ export class PagesService {
 
   async saveDraft(actor: AuthUser, id: string, request: SaveDraftRequest): Promise<Page> {
     const found = await this.requirePage(id);
-    const content = contentOrThrow(request.document);
+    // State first: a save aimed at released or in-review content is refused whatever it holds.
     const draft = await this.repository.findDraft(id);
-    if (!draft) throw LibraryException.of('draft-not-found');
+    if (!draft) throw this.noOpenRevision(found.page);
+    if (draft.state !== 'draft') throw LibraryException.of('in-review');
+    const content = contentOrThrow(request.document);
     const saved = await this.repository.transaction(async (tx) => {
       const saved = await this.repository.saveDraft(
         draft.id,
@@ -147,38 +155,14 @@ export class PagesService {
     return this.get(actor, id, 'draft');
   }
 
-  async publish(actor: AuthUser, id: string, baseVersion: number): Promise<Page> {
-    const published = await this.repository.transaction(async (tx) => {
-      const page = await this.repository.lockPage(id, tx);
-      if (!page) throw LibraryException.of('page-not-found');
-      const draft = await this.repository.findDraft(id, tx);
-      if (!draft) throw LibraryException.of('draft-not-found');
-      const published = await this.repository.publishDraft(draft.id, baseVersion, actor.id, tx);
-      if (!published) return undefined;
-      await this.repository.updatePage(id, { currentPublishedRevisionId: published.id }, tx);
-      await this.audit.record(
-        {
-          actor,
-          action: 'page.published',
-          subjectType: 'page',
-          subjectId: id,
-          detail: { documentNumber: page.documentNumber, revisionId: published.id, sequence: published.sequence, title: published.title, replacedRevisionId: page.currentPublishedRevisionId },
-        },
-        tx,
-      );
-      return published;
-    });
-    if (!published) throw await this.staleDraft(id);
-    return this.get(actor, id, 'published');
-  }
-
-  /** Deleting the draft of a page never published deletes the page: nothing would be left of it. */
+  /** Deleting the draft of a page never released deletes the page: nothing would be left of it. */
   async deleteDraft(actor: AuthUser, id: string): Promise<void> {
     await this.repository.transaction(async (tx) => {
       const page = await this.repository.lockPage(id, tx);
       if (!page) throw LibraryException.of('page-not-found');
       const draft = await this.repository.findDraft(id, tx);
-      if (!draft) throw LibraryException.of('draft-not-found');
+      if (!draft) throw this.noOpenRevision(page);
+      if (draft.state !== 'draft') throw LibraryException.of('in-review');
       await this.repository.deleteRevision(draft.id, tx);
       if (page.currentPublishedRevisionId) {
         await this.repository.updatePage(id, {}, tx);
@@ -190,6 +174,11 @@ export class PagesService {
     });
   }
 
+  /** With no open revision, a change aimed at "the draft" would hit released content: refused. */
+  noOpenRevision(page: { currentPublishedRevisionId: string | null }) {
+    return LibraryException.of(page.currentPublishedRevisionId ? 'released-immutable' : 'draft-not-found');
+  }
+
   private async requirePage(id: string, executor?: Executor): Promise<PageWithCollection> {
     const found = await this.repository.findPage({ id }, executor);
     if (!found) throw LibraryException.of('page-not-found');
@@ -199,6 +188,7 @@ export class PagesService {
   private async staleDraft(pageId: string) {
     const current = await this.repository.findDraft(pageId);
     if (!current) return LibraryException.of('draft-not-found');
+    if (current.state !== 'draft') return LibraryException.of('in-review');
     const people = await this.repository.peopleByIds([current.updatedBy]);
     return LibraryException.staleDraft({
       version: current.version,
@@ -214,8 +204,11 @@ export class PagesService {
     published: PageRevisionRow | undefined,
     draft: PageRevisionRow | undefined,
   ): Promise<Page> {
-    const people = await this.repository.peopleByIds([found.page.ownerId, shown.createdBy, shown.publishedBy]);
+    const [people, watching] = await Promise.all([
+      this.repository.peopleByIds([found.page.ownerId, found.page.obsoleteBy, ...revisionPeopleIds(shown)]),
+      this.repository.isWatching(found.page.id, viewer.id),
+    ]);
     const fileUrls = this.files.signedUrls(viewer.id, referencedFileIds(shown.document));
-    return toPage(found, shown, published, draft, people, fileUrls);
+    return toPage(found, shown, published, draft, people, fileUrls, watching);
   }
 }

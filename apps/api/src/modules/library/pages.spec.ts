@@ -2,6 +2,7 @@ import { type Collection, type DraftConflictBody, type ErrorBody, type Page, typ
 import { everyNodeDocument } from '@limitbook/editor-schema/testing';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../../testing/test-app.js';
+import { releasePage } from './testing/release-page.js';
 
 const paragraph = (text: string) => ({ type: 'paragraph', content: [{ type: 'text', text }] });
 const doc = (...content: object[]) => ({ type: 'doc', content });
@@ -129,17 +130,16 @@ describe('pages over HTTP', () => {
       expect(stored.revision).toMatchObject({ version: 2, title: winner.revision.title });
       const retried = await t.http.put(`/api/pages/${page.id}/draft`).set(as(author)).send({ baseVersion: 2, title: 'Merged', document: doc(paragraph('Merged')) }).expect(200);
       expect((retried.body as Page).revision.version).toBe(3);
-      await t.http.post(`/api/pages/${page.id}/publish`).set(as(author)).send({ baseVersion: 2 }).expect(409);
     });
   });
 
-  describe('drafts and publication', () => {
+  describe('drafts and release', () => {
     let page: Page;
     beforeAll(async () => {
       page = await createPage('TST-PUB-001', { tags: ['wall', 'LMC', 'wall'] });
     });
 
-    it('keeps a never-published page away from readers and reviewers', async () => {
+    it('keeps a never-released page away from readers and reviewers', async () => {
       expect(page.tags).toEqual(['wall', 'LMC']);
       for (const token of [reader, reviewer]) {
         await t.http.get(`/api/pages/${page.id}`).set(as(token)).expect(404);
@@ -149,14 +149,14 @@ describe('pages over HTTP', () => {
         expect(list.items.map((item) => item.documentNumber)).not.toContain('TST-PUB-001');
       }
       await t.http.put(`/api/pages/${page.id}/draft`).set(as(reader)).send({ baseVersion: 1, title: 'x', document: doc() }).expect(403);
-      await t.http.post(`/api/pages/${page.id}/publish`).set(as(reader)).send({ baseVersion: 1 }).expect(403);
+      await t.http.post(`/api/pages/${page.id}/draft/submit`).set(as(reader)).send({ reviewerIds: [page.id] }).expect(403);
       const mine = (await t.http.get('/api/pages?collection=test-rules').set(as(author)).expect(200)).body as PageList;
       expect(mine.items.find((item) => item.documentNumber === 'TST-PUB-001')).toMatchObject({ hasDraft: true, publishedAt: null });
     });
 
-    it('publishes the draft; readers then see the published revision and never the next draft', async () => {
-      const published = (await t.http.post(`/api/pages/${page.id}/publish`).set(as(author)).send({ baseVersion: 1 }).expect(200)).body as Page;
-      expect(published.revision).toMatchObject({ state: 'published', publishedBy: { email: t.demoPerson('author').email } });
+    it('releases the draft; readers then see the released revision and never the next draft', async () => {
+      const published = await releasePage(t, page.id, { submitter: author, approver: reviewer });
+      expect(published.revision).toMatchObject({ state: 'released', revisionLetter: 'A', publishedBy: { email: t.demoPerson('reviewer').email } });
       expect(published.draft).toBeNull();
 
       await t.http.post(`/api/pages/${page.id}/draft`).set(as(author)).expect(201);
@@ -168,18 +168,18 @@ describe('pages over HTTP', () => {
         .expect(200);
 
       const seen = (await t.http.get('/api/pages/tst-pub-001').set(as(reader)).expect(200)).body as Page;
-      expect(seen.revision).toMatchObject({ state: 'published', title: 'Page TST-PUB-001' });
+      expect(seen.revision).toMatchObject({ state: 'released', revisionLetter: 'A', title: 'Page TST-PUB-001' });
       expect(seen.draft).toBeNull();
       expect(JSON.stringify(seen)).not.toContain('Unreleased');
       const listed = (await t.http.get('/api/pages?collection=test-rules').set(as(reader)).expect(200)).body as PageList;
       expect(listed.items.find((item) => item.documentNumber === 'TST-PUB-001')).toMatchObject({ title: 'Page TST-PUB-001', hasDraft: false });
 
       const forAuthor = (await t.http.get(`/api/pages/${page.id}`).set(as(author)).expect(200)).body as Page;
-      expect(forAuthor.revision.state).toBe('published');
+      expect(forAuthor.revision.state).toBe('released');
       expect(forAuthor.draft).toMatchObject({ title: 'Secret next revision', version: 2 });
     });
 
-    it('discards a draft, and a never-published page with its draft', async () => {
+    it('discards a draft, and a never-released page with its draft', async () => {
       await t.http.delete(`/api/pages/${page.id}/draft`).set(as(author)).expect(204);
       await t.http.get(`/api/pages/${page.id}?view=draft`).set(as(author)).expect(404);
       await t.http.get(`/api/pages/${page.id}`).set(as(reader)).expect(200);
@@ -189,10 +189,10 @@ describe('pages over HTTP', () => {
       await t.http.get(`/api/pages/${scratch.id}`).set(as(author)).expect(404);
     });
 
-    it('audits creation and publication', async () => {
+    it('audits creation and release', async () => {
       const audit = await t.http.get('/api/audit?limit=500').set(as(admin)).expect(200);
       const actions = (audit.body as { items: { action: string; subjectId: string | null }[] }).items.filter((item) => item.subjectId === page.id).map((item) => item.action);
-      expect(actions).toEqual(expect.arrayContaining(['page.created', 'page.published', 'page.draft_started', 'page.draft_deleted']));
+      expect(actions).toEqual(expect.arrayContaining(['page.created', 'page.submitted', 'page.released', 'page.draft_started', 'page.draft_deleted']));
     });
   });
 
@@ -201,7 +201,7 @@ describe('pages over HTTP', () => {
       const a = await createPage('TST-LST-001', { tags: ['tst bolt pattern'] });
       const b = await createPage('TST-LST-002', { tags: ['tst bolt pattern', 'tst-flange'], collectionId: other.id });
       await createPage('TST-LST-003', { tags: ['tst-flange'] });
-      for (const page of [a, b]) await t.http.post(`/api/pages/${page.id}/publish`).set(as(author)).send({ baseVersion: 1 }).expect(200);
+      for (const page of [a, b]) await releasePage(t, page.id, { submitter: author, approver: reviewer });
 
       const byTag = (await t.http.get('/api/pages').query({ tag: 'tst bolt pattern' }).set(as(reader)).expect(200)).body as PageList;
       expect(byTag.items.map((item) => item.documentNumber)).toEqual(['TST-LST-001', 'TST-LST-002']);

@@ -1,6 +1,7 @@
 import { type Collection, type ErrorBody, type Page, type SearchHit, type SearchResponse } from '@limitbook/contracts';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../../testing/test-app.js';
+import { releasePage } from '../library/testing/release-page.js';
 
 const text = (value: string) => ({ type: 'text', text: value });
 const paragraph = (value: string) => ({ type: 'paragraph', content: [text(value)] });
@@ -24,7 +25,7 @@ describe('GET /api/search', () => {
       .send({ documentNumber, collectionId: collection.id, title, tags, document: { type: 'doc', content } });
     expect(created.status, JSON.stringify(created.body)).toBe(201);
     const page = created.body as Page;
-    await t.http.post(`/api/pages/${page.id}/publish`).set(as(author)).send({ baseVersion: 1 }).expect(200);
+    await releasePage(t, page.id, { submitter: author, approver: await t.signIn('reviewer') });
     return page;
   }
 

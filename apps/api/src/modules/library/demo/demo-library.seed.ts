@@ -2,8 +2,10 @@ import { Injectable, type OnModuleInit } from '@nestjs/common';
 import { type SeedContext, type SeedStep } from '../../../seed/seed-step.js';
 import { SeedRegistry } from '../../../seed/seed.registry.js';
 import { AuditService } from '../../audit/audit.service.js';
+import { readDemoPeople } from '../../users/users.seed.js';
 import { CollectionsRepository } from '../collections.repository.js';
 import { PagesRepository } from '../pages.repository.js';
+import { nextRevisionLetter } from '../revision-letter.js';
 import { DemoContentError, type DemoLibrary, readDemoLibrary } from './demo-content.js';
 
 /** Key order of JSON objects is not kept by jsonb, so bodies are compared in a canonical form. */
@@ -26,10 +28,11 @@ export interface DemoLoadResult {
 }
 
 /**
- * The demo library from content/demo: its collections and every standard as a published
- * page owned by the person named in its front matter. Loaded on an empty database, and
- * again by `--seed`, which matches pages by document number and publishes a new revision
- * of each one whose title or body changed. Drafts are left alone.
+ * The demo library from content/demo: its collections and every standard as a page owned by
+ * the person named in its front matter, released as revision A and approved by the demo
+ * reviewer. Loaded on an empty database, and again by `--seed`, which matches pages by
+ * document number and releases the next revision of each one whose title or body changed
+ * (superseding the one before). Drafts are left alone.
  */
 @Injectable()
 export class DemoLibrarySeed implements SeedStep, OnModuleInit {
@@ -50,14 +53,17 @@ export class DemoLibrarySeed implements SeedStep, OnModuleInit {
   async run({ mode, config, logger }: SeedContext): Promise<void> {
     if (mode === 'first-start' && !config.seedDemo) return;
     const library = await readDemoLibrary(config.contentDir);
-    const result = await this.load(library);
+    const people = await readDemoPeople(config.contentDir).catch(() => undefined);
+    const result = await this.load(library, people?.people.find((person) => person.role === 'reviewer')?.email);
     logger.log(
       `Demo library: ${result.collections} collections, ${library.standards.length} standards (${result.created} new, ${result.republished} republished, ${result.unchanged} unchanged).`,
     );
   }
 
-  async load(library: DemoLibrary): Promise<DemoLoadResult> {
+  /** `approverEmail`: who approves the releases; the owner when absent or not a user. */
+  async load(library: DemoLibrary, approverEmail?: string): Promise<DemoLoadResult> {
     return this.pages.transaction(async (tx) => {
+      const approverId = approverEmail ? await this.pages.findUserIdByEmail(approverEmail, tx) : undefined;
       const collectionIds = new Map<string, string>();
       for (const entry of library.collections) {
         const existing = await this.collections.findByKey(entry.key, tx);
@@ -82,9 +88,19 @@ export class DemoLibrarySeed implements SeedStep, OnModuleInit {
           continue;
         }
         const revision = await this.pages.insertRevision(
-          { pageId: page!.id, documentNumber: standard.documentNumber, state: 'published', title: standard.title, content: standard.content, userId: ownerId },
+          {
+            pageId: page!.id,
+            documentNumber: standard.documentNumber,
+            state: 'released',
+            title: standard.title,
+            content: standard.content,
+            userId: ownerId,
+            revisionLetter: nextRevisionLetter(current?.revisionLetter),
+          },
           tx,
         );
+        const approved = await this.pages.transition(revision!.id, 'released', { publishedBy: approverId ?? ownerId }, tx);
+        if (current) await this.pages.transition(current.id, 'released', { state: 'superseded', supersededAt: approved!.publishedAt }, tx);
         await this.pages.updatePage(page!.id, { currentPublishedRevisionId: revision!.id }, tx);
         if (found) result.republished += 1;
         else result.created += 1;

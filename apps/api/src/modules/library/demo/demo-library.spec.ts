@@ -25,11 +25,11 @@ describe('the demo library on a fresh database', () => {
     await t?.close();
   });
 
-  it('publishes every standard in content/demo/standards, readable by a reader', async () => {
+  it('releases every standard in content/demo/standards as revision A approved by the demo reviewer, readable by a reader', async () => {
     const files = await listDemoStandardFiles(`${workspaceRoot()}/content`);
     expect(pages).toHaveLength(files.length);
     for (const page of pages) {
-      expect(page.revision.state).toBe('published');
+      expect(page.revision).toMatchObject({ state: 'released', revisionLetter: 'A', publishedBy: { email: t.demoPerson('reviewer').email } });
       expect(page.owner?.email).toMatch(/@brackwater\.example$/);
     }
     const collections = await t.http.get('/api/collections').set('Authorization', `Bearer ${reader}`).expect(200);
