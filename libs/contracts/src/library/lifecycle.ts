@@ -121,3 +121,16 @@ export type WatchedPage = z.infer<typeof watchedPageSchema>;
 
 export const watchedPageListSchema = z.object({ items: z.array(watchedPageSchema) });
 export type WatchedPageList = z.infer<typeof watchedPageListSchema>;
+
+/** Someone who may be asked to review: an active user with role reviewer or admin. */
+export const reviewerCandidateSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  email: z.string(),
+  role: z.enum(['reviewer', 'admin']),
+});
+export type ReviewerCandidate = z.infer<typeof reviewerCandidateSchema>;
+
+/** `GET /api/reviewers` (authors and admins): everyone who can be asked to review, by name. */
+export const reviewerListSchema = z.object({ items: z.array(reviewerCandidateSchema) });
+export type ReviewerList = z.infer<typeof reviewerListSchema>;

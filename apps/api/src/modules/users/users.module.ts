@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { AuditModule } from '../audit/audit.module.js';
 import { AuthModule } from '../auth/auth.module.js';
+import { ReviewersController } from './reviewers.controller.js';
 import { UsersController } from './users.controller.js';
 import { UsersRepository } from './users.repository.js';
 import { BootstrapAdminSeed, DemoPeopleSeed } from './users.seed.js';
@@ -8,7 +9,7 @@ import { UsersService } from './users.service.js';
 
 @Module({
   imports: [AuthModule, AuditModule],
-  controllers: [UsersController],
+  controllers: [UsersController, ReviewersController],
   providers: [UsersService, UsersRepository, BootstrapAdminSeed, DemoPeopleSeed],
 })
 export class UsersModule {}

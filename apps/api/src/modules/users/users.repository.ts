@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, count, eq, ne } from 'drizzle-orm';
+import { and, asc, count, eq, inArray, ne } from 'drizzle-orm';
 import { DRIZZLE } from '../../database/database.module.js';
 import { type Database, type Executor } from '../../database/database.js';
 import { type NewUserRow, users, type UserRow } from '../../database/schema/index.js';
@@ -18,6 +18,15 @@ export class UsersRepository {
       this.db.select({ total: count() }).from(users),
     ]);
     return { rows, total: totals?.total ?? 0 };
+  }
+
+  /** Active users who may review (role reviewer or admin), by name. */
+  async listActiveReviewers(): Promise<UserRow[]> {
+    return this.db
+      .select()
+      .from(users)
+      .where(and(inArray(users.role, ['reviewer', 'admin']), eq(users.status, 'active')))
+      .orderBy(asc(users.name), asc(users.email));
   }
 
   async count(): Promise<number> {
