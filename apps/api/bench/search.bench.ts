@@ -62,7 +62,7 @@ async function main(): Promise<void> {
         if (!prepared.ok) throw new Error(JSON.stringify(prepared.fields));
         const documentNumber = `BN-STD-${String(index).padStart(5, '0')}`;
         const page = await pages.insertPage({ documentNumber, collectionId: collection!.id, tags: [pick(trade), pick(trade)] }, tx);
-        const revision = await pages.insertRevision({ pageId: page!.id, documentNumber, state: 'published', title: sentence(7), content: prepared.content, userId: null }, tx);
+        const revision = await pages.insertRevision({ pageId: page!.id, documentNumber, state: 'released', title: sentence(7), content: prepared.content, userId: null }, tx);
         await pages.updatePage(page!.id, { currentPublishedRevisionId: revision!.id }, tx);
       }
     });

@@ -15,6 +15,7 @@ import { HealthModule } from './modules/health/health.module.js';
 import { LibraryModule } from './modules/library/library.module.js';
 import { MailModule } from './modules/mail/mail.module.js';
 import { MethodsModule } from './modules/methods/methods.module.js';
+import { RecordsModule } from './modules/records/records.module.js';
 import { SearchModule } from './modules/search/search.module.js';
 import { UsersModule } from './modules/users/users.module.js';
 import { SeedModule } from './seed/seed.module.js';
@@ -80,6 +81,7 @@ export class AppModule {
         LibraryModule,
         FilesModule,
         SearchModule,
+        RecordsModule,
         DocsModule,
         ...webAppModules(options.config.webDist),
         ...(options.imports ?? []),

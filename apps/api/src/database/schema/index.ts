@@ -8,3 +8,5 @@ export * from './pages.js';
 export * from './page-revisions.js';
 export * from './stored-files.js';
 export * from './page-watches.js';
+export * from './calculation-records.js';
+export * from './impact-reports.js';

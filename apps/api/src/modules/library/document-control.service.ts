@@ -1,4 +1,4 @@
-import { Inject, Injectable } from '@nestjs/common';
+import { Inject, Injectable, Logger } from '@nestjs/common';
 import {
   type ApproveRequest,
   type Page,
@@ -16,6 +16,7 @@ import { type Executor } from '../../database/database.js';
 import { type PageRevisionRow, type PageRow } from '../../database/schema/index.js';
 import { AuditService } from '../audit/audit.service.js';
 import { MailService } from '../mail/mail.service.js';
+import { RecordsService } from '../records/records.service.js';
 import { releaseNoticeMail, reviewRequestMail, sentBackMail } from '../mail/templates/document-control.mail.js';
 import { compareBlocks, compareText } from './compare-revisions.js';
 import { revisionPeopleIds, toCollectionRef, toHistoryEntry, toPageRevision } from './dto/library.dto.js';
@@ -40,6 +41,8 @@ function contributors(revision: PageRevisionRow): Set<string> {
  * history and comparison, restore, obsolescence and watching. Every state change is audited
  * in the transaction that makes it; mail goes out after it commits.
  */
+const impactLogger = new Logger('ImpactCheck');
+
 @Injectable()
 export class DocumentControlService {
   constructor(
@@ -47,6 +50,7 @@ export class DocumentControlService {
     private readonly pages: PagesService,
     private readonly audit: AuditService,
     private readonly mail: MailService,
+    private readonly records: RecordsService,
     @Inject(APP_CONFIG) private readonly config: ResolvedConfig,
   ) {}
 
@@ -146,8 +150,9 @@ export class DocumentControlService {
         tx,
       );
       const watchers = await this.repository.watchers(id, tx);
-      return { page, revision: released!, watchers };
+      return { page, revision: released!, watchers, previousId: previous?.id };
     });
+    if (released.previousId) this.scheduleImpactCheck(id, released.previousId, released.revision.id, actor);
     for (const watcher of released.watchers) {
       if (watcher.id === actor.id) continue;
       this.mail.dispatch({
@@ -290,5 +295,14 @@ export class DocumentControlService {
   /** Web addresses: the page, its review screen or its editor. */
   private pageUrl(page: PageRow, screen: '' | '/review' | '/edit'): string {
     return `${this.config.publicUrl}/standards/${encodeURIComponent(page.documentNumber)}${screen}`;
+  }
+
+  /** Re-evaluates the records made under the superseded release after the response is sent, so a release never waits on them. */
+  private scheduleImpactCheck(pageId: string, fromRevisionId: string, toRevisionId: string, actor: AuthUser): void {
+    setImmediate(() => {
+      this.records.checkImpact(pageId, fromRevisionId, toRevisionId, actor).catch((error: unknown) => {
+        impactLogger.error(`Impact check for page ${pageId} failed: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
+      });
+    });
   }
 }

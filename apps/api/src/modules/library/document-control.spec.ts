@@ -248,6 +248,8 @@ describe('document control over HTTP', () => {
 
       const list = (await t.http.get('/api/pages?collection=dc-rules').set(as(reader)).expect(200)).body as PageList;
       expect(list.items).toEqual([]);
+      const found = await t.http.get('/api/search?q=DC-WAL-001').set(as(reader)).expect(200);
+      expect(found.body.items).toEqual([]);
       const all = (await t.http.get('/api/pages?collection=dc-rules&includeObsolete=true').set(as(reader)).expect(200)).body as PageList;
       expect(all.items).toEqual([expect.objectContaining({ documentNumber: 'DC-WAL-001', obsolete: true, revisionLetter: 'B' })]);
       const read = (await t.http.get(url()).set(as(reader)).expect(200)).body as Page;
@@ -258,6 +260,7 @@ describe('document control over HTTP', () => {
       await t.http.post(url('/reinstate')).set(as(admin)).expect(409);
       const listed = (await t.http.get('/api/pages?collection=dc-rules').set(as(reader)).expect(200)).body as PageList;
       expect(listed.items).toHaveLength(1);
+      expect((await t.http.get('/api/search?q=DC-WAL-001').set(as(reader)).expect(200)).body.items).toHaveLength(1);
     });
 
     it('audits every state change, the restore and obsolescence', async () => {

@@ -49,10 +49,11 @@ export class SearchRepository {
  * title (weight A) holds the words, then ts_rank.
  */
 export function searchQuery(filter: SearchFilter): SQL {
-  const conditions: SQL[] = [];
+  // Obsolete pages stay readable by link but drop out of search.
+  const conditions: SQL[] = [sql`p.obsolete_at is null`];
   if (filter.collectionKey) conditions.push(sql`p.collection_id = (select id from collections where key = ${filter.collectionKey})`);
   if (filter.tag) conditions.push(sql`p.tags @> array[${filter.tag}]::text[]`);
-  const filters = conditions.length > 0 ? sql` and ${sql.join(conditions, sql` and `)}` : sql``;
+  const filters = sql` and ${sql.join(conditions, sql` and `)}`;
   const prefix = filter.numberPrefix ? `${filter.numberPrefix}%` : null;
   // The tsquery is written out where it filters, not read from the CTE, so the planner can use
   // the GIN index. Two index lookups (GIN on the vectors, btree prefix on numbers) instead of one OR that
