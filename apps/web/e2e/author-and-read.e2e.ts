@@ -46,7 +46,7 @@ describe('authoring a standard and reading it', () => {
     await server?.stop();
   });
 
-  it('an author writes a page with a wall calculator and publishes it; a reader runs it; no typed payload ever executes', async () => {
+  it('an author writes a page with a wall calculator and submits it for review; a reviewer approves it as revision A; a reader runs it; no typed payload ever executes', async () => {
     const author = await openPage(browser, server.baseUrl);
     const dialogs: string[] = [];
     const page = author.page;
@@ -151,9 +151,17 @@ describe('authoring a standard and reading it', () => {
       await expect.poll(() => body.textContent()).toContain('Scope: every bore located to its boss.');
       expect(await page.getByRole('group', { name: /^Calculator: Wall between/ }).count()).toBe(1);
 
-      await page.getByRole('button', { name: 'Publish' }).click();
-      await page.getByRole('dialog', { name: `Publish ${documentNumber}?` }).getByRole('button', { name: 'Publish' }).click();
-      await page.waitForURL(`**/standards/${documentNumber}`);
+      // Publishing now goes through review: ask the demo reviewer.
+      await page.getByRole('button', { name: 'Submit for review' }).click();
+      const submitDialog = page.getByRole('dialog', { name: `Submit ${documentNumber} for review` });
+      await submitDialog.getByLabel(/^Reviewers/).click();
+      await page.getByRole('option', { name: new RegExp(demo.reviewer.name) }).click();
+      await submitDialog.getByLabel(/Note for the reviewers/).fill('First issue: please check the wall rule.');
+      await submitDialog.getByRole('button', { name: 'Submit for review' }).click();
+      await page.getByText('In review: read-only').waitFor();
+      await page.getByRole('button', { name: 'Withdraw' }).waitFor();
+      expect(await body.getAttribute('contenteditable')).toBe('false');
+      await shot(page, '5-in-review');
       await noXss(page);
       await signOut(page, demo.author.name);
     } finally {
@@ -163,7 +171,27 @@ describe('authoring a standard and reading it', () => {
     // The session restore before sign-in (401), the refused save (400) and the stale save (409) are expected.
     expect(author.problems.filter((problem) => !/status of (401|400|409)/.test(problem))).toEqual([]);
 
-    // The reader runs the published calculator.
+    // The reviewer opens the revision in review and approves it: it is released as revision A.
+    const reviewer = await openPage(browser, server.baseUrl);
+    try {
+      const reviewerPage = reviewer.page;
+      await signIn(reviewerPage, demo.reviewer.email, demo.reviewer.password);
+      await reviewerPage.goto(`/standards/${documentNumber}?view=draft`);
+      const review = reviewerPage.getByRole('alert', { name: 'Revision in review' });
+      await review.getByText('First issue: please check the wall rule.').waitFor();
+      await review.getByRole('button', { name: 'Approve' }).click();
+      const approveDialog = reviewerPage.getByRole('dialog', { name: `Approve ${documentNumber}?` });
+      await approveDialog.getByLabel(/Comment/).fill('Checked against the drawing rules.');
+      await approveDialog.getByRole('button', { name: 'Approve and release' }).click();
+      await reviewerPage.waitForURL((url) => url.pathname === `/standards/${documentNumber}` && url.search === '');
+      await reviewerPage.getByText('Rev. A').waitFor();
+      await noXss(reviewerPage);
+    } finally {
+      await reviewer.context.close();
+    }
+    expect(reviewer.problems.filter((problem) => !/status of 401/.test(problem))).toEqual([]);
+
+    // The reader runs the released calculator.
     const reader = await openPage(browser, server.baseUrl);
     const readerPage = reader.page;
     readerPage.on('dialog', (dialog) => {
@@ -173,6 +201,7 @@ describe('authoring a standard and reading it', () => {
     try {
       await signIn(readerPage, demo.reader.email, demo.reader.password);
       await readerPage.goto(`/standards/${documentNumber}`);
+      await readerPage.getByText('Rev. A').waitFor();
       await readerPage.getByText(textPayload, { exact: false }).first().waitFor();
       const card = readerPage.locator('section[data-calculator-block]');
       await shot(readerPage, '5-reader-page');

@@ -4,6 +4,7 @@ export const demo = {
   admin: { email: 'maren.holt@brackwater.example', password: 'limitbook-admin', name: 'Maren Holt' },
   author: { email: 'idris.okafor@brackwater.example', password: 'limitbook-author', name: 'Idris Okafor' },
   reader: { email: 'tomas.wren@brackwater.example', password: 'limitbook-reader', name: 'Tomas Wren' },
+  reviewer: { email: 'sunniva.lind@brackwater.example', password: 'limitbook-reviewer', name: 'Sunniva Lind' },
 } as const;
 
 export async function signIn(page: Page, email: string, password: string) {

@@ -4,6 +4,7 @@ import type { Role } from '@limitbook/contracts';
 const areas = {
   library: ['admin', 'author', 'reviewer', 'reader'],
   'standards.edit': ['admin', 'author'],
+  'standards.review': ['admin', 'reviewer'],
   'admin.users': ['admin'],
   'admin.mail': ['admin'],
   'admin.audit': ['admin'],

@@ -93,7 +93,7 @@ export function CreatePageForm({ onCreated, onCancel }: Props) {
             {...form.getInputProps('tags')}
           />
           <Text size="sm" c="dimmed">
-            The page starts as a draft only authors see. You write it next, then publish it.
+            The page starts as a draft only authors see. You write it next, then submit it for review.
           </Text>
           <Group justify="flex-end">
             <Button variant="default" onClick={onCancel}>

@@ -4,8 +4,8 @@ import { notifications } from '@mantine/notifications';
 import { RichTextEditor } from '@mantine/tiptap';
 import type { Page } from '@limitbook/contracts';
 import { useEditor, type JSONContent } from '@tiptap/react';
-import { IconDeviceFloppy, IconSend } from '@tabler/icons-react';
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { IconArrowBackUp, IconDeviceFloppy, IconSend } from '@tabler/icons-react';
+import { useEffect, useMemo, useState } from 'react';
 import { Link, useBlocker } from 'react-router-dom';
 import { formatRelative } from '../lib/format-time';
 import { pageEditorExtensions } from '../lib/editor-extensions';
@@ -15,17 +15,16 @@ import { useSaveShortcut } from '../hooks/use-save-shortcut';
 import { ConflictModal } from './conflict-modal';
 import { DocumentProblemsAlert } from './document-problems-alert';
 import { EditorToolbar } from './editor-toolbar';
+import { SubmitReviewModal } from './submit-review-modal';
 import classes from './page-editor.module.css';
 
 type Props = {
   page: Page;
-  /** Where readers see the page; the editor goes there after publishing. */
-  onPublished: (page: Page) => void;
   /** Link back to the page as readers see it, when it has been published. */
   readerHref?: string;
 };
 
-export function PageEditor({ page, onPublished, readerHref }: Props) {
+export function PageEditor({ page, readerHref }: Props) {
   const fileUrls = useMemo(() => createFileUrls(page.fileUrls), [page.fileUrls]);
   const extensions = useMemo(() => pageEditorExtensions(), []);
   const editor = useEditor({
@@ -37,13 +36,12 @@ export function PageEditor({ page, onPublished, readerHref }: Props) {
   });
   const session = useDraftSession(editor, page, fileUrls);
   const { state, dirty } = session;
-  const [confirmPublish, setConfirmPublish] = useState(false);
-  const leaving = useRef(false);
+  const [asking, setAsking] = useState(false);
 
   useDocumentTitle(`${dirty ? '• ' : ''}Editing ${page.documentNumber} · Limitbook`);
   useSaveShortcut(() => void session.save());
 
-  const blocker = useBlocker(({ currentLocation, nextLocation }) => dirty && !leaving.current && currentLocation.pathname !== nextLocation.pathname);
+  const blocker = useBlocker(({ currentLocation, nextLocation }) => dirty && currentLocation.pathname !== nextLocation.pathname);
   useEffect(() => {
     if (!dirty) return;
     const warn = (event: BeforeUnloadEvent) => event.preventDefault();
@@ -51,13 +49,16 @@ export function PageEditor({ page, onPublished, readerHref }: Props) {
     return () => window.removeEventListener('beforeunload', warn);
   }, [dirty]);
 
-  const publish = async () => {
-    setConfirmPublish(false);
-    const published = await session.publish();
-    if (!published) return;
-    notifications.show({ color: 'verdigris', title: `${published.documentNumber} published`, message: 'Readers now see this revision.' });
-    leaving.current = true;
-    onPublished(published);
+  const inReview = state.inReview;
+  useEffect(() => {
+    editor.setEditable(!inReview);
+  }, [editor, inReview]);
+
+  const submit = async (request: { reviewerIds: string[]; note?: string }) => {
+    const submitted = await session.submit(request);
+    if (!submitted) return;
+    setAsking(false);
+    notifications.show({ color: 'verdigris', title: `${submitted.documentNumber} is in review`, message: 'The reviewers have been asked by mail.' });
   };
 
   const busy = state.phase !== 'idle';
@@ -71,15 +72,17 @@ export function PageEditor({ page, onPublished, readerHref }: Props) {
             <div className={classes.actionBar}>
               <Group gap="xs" wrap="nowrap" className={classes.identity}>
                 <Text className={classes.number}>{page.documentNumber}</Text>
-                <Badge color="amber" variant="light">
-                  Draft · v{state.baseVersion}
+                <Badge color={inReview ? 'blue' : 'amber'} variant="light">
+                  {inReview ? 'In review' : 'Draft'} · v{state.baseVersion}
                 </Badge>
                 <Text size="sm" className={classes.status} role="status" aria-live="polite" data-dirty={dirty || undefined}>
                   {state.phase === 'saving'
                     ? 'Saving…'
-                    : state.phase === 'publishing'
-                      ? 'Publishing…'
-                      : dirty
+                    : state.phase === 'submitting'
+                      ? 'Submitting…'
+                      : state.phase === 'withdrawing'
+                        ? 'Withdrawing…'
+                        : dirty
                         ? 'Unsaved changes'
                         : state.savedAt
                           ? `Saved ${formatRelative(state.savedAt)}`
@@ -92,30 +95,46 @@ export function PageEditor({ page, onPublished, readerHref }: Props) {
                     View published
                   </Button>
                 )}
-                <Button
-                  variant="default"
-                  size="sm"
-                  leftSection={<IconDeviceFloppy size={16} />}
-                  rightSection={
-                    <Kbd size="xs" className={classes.kbd}>
-                      Ctrl S
-                    </Kbd>
-                  }
-                  onClick={() => void session.save()}
-                  loading={state.phase === 'saving'}
-                  disabled={busy || (!dirty && !state.overwriting)}
-                >
-                  Save draft
-                </Button>
-                <Button size="sm" leftSection={<IconSend size={16} />} onClick={() => setConfirmPublish(true)} disabled={busy || !!state.conflict} loading={state.phase === 'publishing'}>
-                  Publish
-                </Button>
+                {inReview ? (
+                  <Button size="sm" variant="default" leftSection={<IconArrowBackUp size={16} />} onClick={() => void session.withdraw()} loading={state.phase === 'withdrawing'} disabled={busy}>
+                    Withdraw
+                  </Button>
+                ) : (
+                  <>
+                    <Button
+                      variant="default"
+                      size="sm"
+                      leftSection={<IconDeviceFloppy size={16} />}
+                      rightSection={
+                        <Kbd size="xs" className={classes.kbd}>
+                          Ctrl S
+                        </Kbd>
+                      }
+                      onClick={() => void session.save()}
+                      loading={state.phase === 'saving'}
+                      disabled={busy || (!dirty && !state.overwriting)}
+                    >
+                      Save draft
+                    </Button>
+                    <Button size="sm" leftSection={<IconSend size={16} />} onClick={() => setAsking(true)} disabled={busy || !!state.conflict} loading={state.phase === 'submitting'}>
+                      Submit for review
+                    </Button>
+                  </>
+                )}
               </Group>
             </div>
-            <EditorToolbar />
+            {!inReview && <EditorToolbar />}
           </div>
 
           <div className={classes.sheet}>
+            {inReview && (
+              <Alert color="blue" title="In review: read-only" mb="md">
+                {inReview.submittedBy ? `${inReview.submittedBy.name} asked ` : 'Asked '}
+                {inReview.reviewers.map((reviewer) => reviewer.name).join(', ') || 'the reviewers'} to review this revision
+                {inReview.submittedAt ? ` ${formatRelative(inReview.submittedAt)}` : ''}. Withdraw it to make changes.
+                {inReview.note && <Text size="sm" mt="xs">Note: {inReview.note}</Text>}
+              </Alert>
+            )}
             {state.overwriting && (
               <Alert color="amber" title="You are keeping your copy" mb="md">
                 Saving replaces version {state.overwriting.version} (saved {formatRelative(state.overwriting.updatedAt)}) with what you see here.
@@ -127,6 +146,7 @@ export function PageEditor({ page, onPublished, readerHref }: Props) {
               placeholder="Title of the standard"
               value={session.title}
               onChange={(event) => session.setTitle(event.currentTarget.value)}
+              readOnly={!!inReview}
               error={titleError}
               maxLength={200}
               variant="unstyled"
@@ -143,20 +163,14 @@ export function PageEditor({ page, onPublished, readerHref }: Props) {
         onKeepMine={() => void session.keepMine()}
       />
 
-      <Modal opened={confirmPublish} onClose={() => setConfirmPublish(false)} title={`Publish ${page.documentNumber}?`}>
-        <Stack gap="md">
-          <Text size="sm">
-            Readers will see this revision at once, and its calculators will run with the defaults, locks and rules you set.
-            {dirty && ' Your unsaved changes are saved first.'}
-          </Text>
-          <Group justify="flex-end">
-            <Button variant="default" onClick={() => setConfirmPublish(false)}>
-              Keep editing
-            </Button>
-            <Button onClick={() => void publish()}>Publish</Button>
-          </Group>
-        </Stack>
-      </Modal>
+      <SubmitReviewModal
+        opened={asking}
+        documentNumber={page.documentNumber}
+        dirty={dirty}
+        submitting={state.phase === 'submitting' || state.phase === 'saving'}
+        onClose={() => setAsking(false)}
+        onSubmit={(request) => void submit(request)}
+      />
 
       <Modal opened={blocker.state === 'blocked'} onClose={() => blocker.reset?.()} title="Leave without saving?">
         <Stack gap="md">

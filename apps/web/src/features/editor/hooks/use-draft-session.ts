@@ -1,11 +1,11 @@
 import { notifications } from '@mantine/notifications';
-import type { Page } from '@limitbook/contracts';
+import type { Page, SubmitForReviewRequest } from '@limitbook/contracts';
 import type { Editor, JSONContent } from '@tiptap/react';
 import { useCallback, useEffect, useLayoutEffect, useReducer, useRef, useState } from 'react';
 import { errorMessage } from '@/components/form/server-errors';
 import { isApiError } from '@/lib/api-client';
 import { getLatestDraft } from '../api/get-draft';
-import { publishDraft } from '../api/publish-draft';
+import { submitForReview, withdrawFromReview } from '../api/review';
 import { saveDraft } from '../api/save-draft';
 import { draftReducer, initialDraftState, isDirty, type DraftSnapshot } from '../lib/draft-session';
 import type { FileUrls } from './use-file-urls';
@@ -19,7 +19,7 @@ function rememberFileUrls(fileUrls: FileUrls, page: Page) {
 }
 
 /**
- * Saving, publishing and optimistic locking for one page's draft: every save names the
+ * Saving, submitting for review and optimistic locking for one page's draft: every save names the
  * version it started from, and a newer version on the server is never overwritten silently.
  */
 export function useDraftSession(editor: Editor, page: Page, fileUrls: FileUrls) {
@@ -60,7 +60,7 @@ export function useDraftSession(editor: Editor, page: Page, fileUrls: FileUrls) 
 
   /** Saves the draft; resolves to whether the server took it. */
   const save = useCallback(async (): Promise<boolean> => {
-    if (stateRef.current.phase !== 'idle' || stateRef.current.conflict) return false;
+    if (stateRef.current.phase !== 'idle' || stateRef.current.conflict || stateRef.current.inReview) return false;
     const snapshot = snapshotOf(editor, titleRef.current);
     dispatch({ type: 'save-started' });
     try {
@@ -78,19 +78,37 @@ export function useDraftSession(editor: Editor, page: Page, fileUrls: FileUrls) 
     }
   }, [editor, fileUrls, handleFailure]);
 
-  /** Saves what is unsaved, then publishes that version. Resolves to the published page, or null. */
-  const publish = useCallback(async (): Promise<Page | null> => {
-    if (isDirty(stateRef.current, snapshotOf(editor, titleRef.current)) && !(await save())) return null;
-    dispatch({ type: 'publish-started' });
+  /** Saves what is unsaved, then submits that version for review. Resolves to the page in review, or null. */
+  const submit = useCallback(
+    async (request: SubmitForReviewRequest): Promise<Page | null> => {
+      if (isDirty(stateRef.current, snapshotOf(editor, titleRef.current)) && !(await save())) return null;
+      dispatch({ type: 'submit-started' });
+      try {
+        const submitted = await submitForReview(stateRef.current.pageId, request);
+        dispatch({ type: 'submitted', page: submitted });
+        return submitted;
+      } catch (error) {
+        await handleFailure(error);
+        return null;
+      }
+    },
+    [editor, save, handleFailure],
+  );
+
+  /** Takes the revision back out of review so it can be edited again. */
+  const withdraw = useCallback(async (): Promise<boolean> => {
+    if (stateRef.current.phase !== 'idle' || !stateRef.current.inReview) return false;
+    dispatch({ type: 'withdraw-started' });
     try {
-      const published = await publishDraft(stateRef.current.pageId, stateRef.current.baseVersion);
-      dispatch({ type: 'settled' });
-      return published;
+      const withdrawn = await withdrawFromReview(stateRef.current.pageId);
+      dispatch({ type: 'withdrawn', page: withdrawn });
+      return true;
     } catch (error) {
-      await handleFailure(error);
-      return null;
+      notifications.show({ color: 'redline', title: 'Not withdrawn', message: errorMessage(error) });
+      dispatch({ type: 'settled' });
+      return false;
     }
-  }, [editor, save, handleFailure]);
+  }, []);
 
   /** Drops the local copy for the version on the server. */
   const reloadLatest = useCallback(async () => {
@@ -115,5 +133,5 @@ export function useDraftSession(editor: Editor, page: Page, fileUrls: FileUrls) 
     }
   }, []);
 
-  return { state, title, setTitle, dirty, save, publish, reloadLatest, keepMine };
+  return { state, title, setTitle, dirty, save, submit, withdraw, reloadLatest, keepMine };
 }

@@ -1,4 +1,4 @@
-import type { Page } from '@limitbook/contracts';
+import type { Page, RevisionReview } from '@limitbook/contracts';
 
 /** What a save sends, kept as text so two versions compare cheaply. */
 export type DraftSnapshot = { title: string; document: string };
@@ -10,7 +10,9 @@ export type DraftState = {
   baseVersion: number;
   /** The copy the server holds at `baseVersion`, as this editor last saved or loaded it. */
   saved: DraftSnapshot;
-  phase: 'idle' | 'saving' | 'publishing';
+  phase: 'idle' | 'saving' | 'submitting' | 'withdrawing';
+  /** Set while the revision is in review: nothing can be edited until it is withdrawn. */
+  inReview: RevisionReview | null;
   /** A save was refused because someone saved a newer version (`latest`, when it could be fetched). */
   conflict: { message: string; latest: Page | null } | null;
   /** The author chose to keep their copy: the next save replaces this newer version. */
@@ -22,7 +24,10 @@ export type DraftState = {
 
 export type DraftAction =
   | { type: 'save-started' }
-  | { type: 'publish-started' }
+  | { type: 'submit-started' }
+  | { type: 'withdraw-started' }
+  | { type: 'submitted'; page: Page }
+  | { type: 'withdrawn'; page: Page }
   | { type: 'saved'; page: Page; snapshot: DraftSnapshot }
   | { type: 'conflict'; message: string; latest: Page | null }
   | { type: 'refused'; message: string; fields: Record<string, string> }
@@ -37,6 +42,7 @@ export function initialDraftState(page: Page, snapshot: DraftSnapshot): DraftSta
     baseVersion: page.revision.version,
     saved: snapshot,
     phase: 'idle',
+    inReview: page.revision.state === 'in_review' ? page.revision.review : null,
     conflict: null,
     overwriting: null,
     refused: null,
@@ -48,8 +54,14 @@ export function draftReducer(state: DraftState, action: DraftAction): DraftState
   switch (action.type) {
     case 'save-started':
       return { ...state, phase: 'saving' };
-    case 'publish-started':
-      return { ...state, phase: 'publishing' };
+    case 'submit-started':
+      return { ...state, phase: 'submitting' };
+    case 'withdraw-started':
+      return { ...state, phase: 'withdrawing' };
+    case 'submitted':
+      return { ...state, phase: 'idle', baseVersion: action.page.revision.version, inReview: action.page.revision.review, refused: null };
+    case 'withdrawn':
+      return { ...state, phase: 'idle', baseVersion: action.page.revision.version, inReview: null, savedAt: action.page.revision.updatedAt };
     case 'saved':
       return {
         ...state,

@@ -8,9 +8,12 @@ import { outlineOf, type DocNode } from '@/components/document/outline';
 import { PanelError } from '@/components/errors/panel-error';
 import { paths } from '@/config/paths';
 import { isApiError } from '@/lib/api-client';
+import { canAccess } from '@/lib/authorization';
 import { formatDate, formatDateTime } from '@/lib/format';
-import { usePage } from '../api/get-page';
+import { useSessionUser } from '@/lib/session';
+import { usePage, type PageView } from '../api/get-page';
 import { usePageEvaluations } from '../api/use-page-evaluations';
+import { ReviewPanel, ReviewWaitingBanner } from './review-panel';
 import { TableOfContents } from './table-of-contents';
 import classes from './standard-view.module.css';
 
@@ -42,8 +45,9 @@ function NotFound({ documentNumber }: { documentNumber: string }) {
 }
 
 /** A standard as readers see it: the released text with every calculator block live. */
-export function StandardView({ documentNumber }: { documentNumber: string }) {
-  const page = usePage(documentNumber);
+export function StandardView({ documentNumber, view = 'released' }: { documentNumber: string; view?: PageView }) {
+  const page = usePage(documentNumber, view);
+  const reviewer = canAccess(useSessionUser().role, 'standards.review');
   const methods = useMethods();
   const document = page.data?.revision.document as DocNode | undefined;
   const blocks = useMemo(() => (document ? blocksOf(document) : []), [document]);
@@ -71,6 +75,8 @@ export function StandardView({ documentNumber }: { documentNumber: string }) {
   const letter = (revision as { revisionLetter?: string | null }).revisionLetter ?? null;
   const obsolete = (page.data as { obsolete?: { reason: string; at: string } | null }).obsolete ?? null;
   const released = state === 'published' || state === 'released';
+  const inReview = state === 'in_review';
+  const reviewWaiting = reviewer && !inReview && page.data.draft?.state === 'in_review';
   const blocksById = new Map(blocks.map((block) => [block.blockId, block]));
 
   return (
@@ -85,6 +91,9 @@ export function StandardView({ documentNumber }: { documentNumber: string }) {
           </Anchor>
           <Text size="sm">{page.data.documentNumber}</Text>
         </Breadcrumbs>
+
+        {reviewWaiting && <ReviewWaitingBanner documentNumber={page.data.documentNumber} />}
+        {reviewer && inReview && <ReviewPanel page={page.data} />}
 
         <header className={classes.header}>
           <Group gap="sm" align="center" wrap="wrap">

@@ -1,4 +1,4 @@
-import { Navigate, useNavigate, useParams } from 'react-router-dom';
+import { Navigate, useParams } from 'react-router-dom';
 import { PanelError } from '@/components/errors/panel-error';
 import { PageLoader } from '@/components/layout/page-loader';
 import { paths } from '@/config/paths';
@@ -10,7 +10,6 @@ import { useSessionUser } from '@/lib/session';
 export function EditStandardRoute() {
   const { documentNumber = '' } = useParams();
   const user = useSessionUser();
-  const navigate = useNavigate();
   const allowed = canAccess(user.role, 'standards.edit');
   const draft = useEditableDraft(documentNumber, allowed);
 
@@ -24,7 +23,6 @@ export function EditStandardRoute() {
       key={page.revision.id}
       page={page}
       readerHref={page.published ? paths.standards.page.getHref(page.documentNumber) : undefined}
-      onPublished={(published) => navigate(paths.standards.page.getHref(published.documentNumber))}
     />
   );
 }
