@@ -152,7 +152,10 @@ export function PageEditor({ page, readerHref }: Props) {
               variant="unstyled"
               classNames={{ input: classes.titleInput }}
             />
-            <RichTextEditor.Content className={classes.content} />
+            {/* In review, the calculator blocks' own fields are closed too, not just the text. */}
+            <fieldset disabled={!!inReview} className={classes.lockable}>
+              <RichTextEditor.Content className={classes.content} />
+            </fieldset>
           </div>
         </RichTextEditor>
       </Stack>
