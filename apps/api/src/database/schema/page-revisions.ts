@@ -57,7 +57,8 @@ export const pageRevisions = pgTable(
     // One open revision per page: a draft, or the same revision while in review.
     uniqueIndex('page_revisions_one_draft_idx').on(table.pageId).where(sql`${table.state} in ('draft', 'in_review')`),
     unique('page_revisions_page_letter_unique').on(table.pageId, table.revisionLetter),
-    index('page_revisions_search_idx').using('gin', table.searchVector),
+    // fastupdate off: PGlite never runs autovacuum, so a pending list would grow unmerged and the planner would skip the index.
+    index('page_revisions_search_idx').using('gin', table.searchVector).with({ fastupdate: false }),
     check('page_revisions_state_check', sql`${table.state} in ('draft', 'in_review', 'released', 'superseded')`),
     check('page_revisions_version_check', sql`${table.version} >= 1`),
   ],
