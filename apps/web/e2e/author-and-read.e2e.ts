@@ -1,10 +1,10 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
-import type { Browser, Locator, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, openPage } from './support/browser';
+import type { Locator, Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { useAppUnderTest } from './support/app-under-test';
+import { openPage } from './support/browser';
 import { demo, signIn, signOut } from './support/flows';
-import { startServer, type RunningServer } from './support/server';
 
 const documentNumber = 'BW-STD-900';
 const textPayload = '<img src=x onerror=window.__xss=1>';
@@ -33,21 +33,10 @@ async function fillNumber(scope: Locator, path: string, value: string) {
 }
 
 describe('authoring a standard and reading it', () => {
-  let server: RunningServer;
-  let browser: Browser;
-
-  beforeAll(async () => {
-    server = await startServer();
-    browser = await launchBrowser();
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const app = useAppUnderTest();
 
   it('an author writes a page with a wall calculator and submits it for review; a reviewer approves it as revision A; a reader runs it; no typed payload ever executes', async () => {
-    const author = await openPage(browser, server.baseUrl);
+    const author = await openPage(app.browser, app.server.baseUrl);
     const dialogs: string[] = [];
     const page = author.page;
     page.on('response', (response) => {
@@ -123,7 +112,7 @@ describe('authoring a standard and reading it', () => {
       await page.getByRole('status').filter({ hasText: /^Saved/ }).waitFor();
 
       // Someone else saves the draft meanwhile: the next save is refused, and nothing is lost.
-      const other = await openPage(browser, server.baseUrl);
+      const other = await openPage(app.browser, app.server.baseUrl);
       try {
         await signIn(other.page, demo.author.email, demo.author.password);
         await other.page.goto(`/standards/${documentNumber}/edit`);
@@ -172,7 +161,7 @@ describe('authoring a standard and reading it', () => {
     expect(author.problems.filter((problem) => !/status of (401|400|409)/.test(problem))).toEqual([]);
 
     // The reviewer opens the revision in review and approves it: it is released as revision A.
-    const reviewer = await openPage(browser, server.baseUrl);
+    const reviewer = await openPage(app.browser, app.server.baseUrl);
     try {
       const reviewerPage = reviewer.page;
       await signIn(reviewerPage, demo.reviewer.email, demo.reviewer.password);
@@ -192,7 +181,7 @@ describe('authoring a standard and reading it', () => {
     expect(reviewer.problems.filter((problem) => !/status of 401/.test(problem))).toEqual([]);
 
     // The reader runs the released calculator.
-    const reader = await openPage(browser, server.baseUrl);
+    const reader = await openPage(app.browser, app.server.baseUrl);
     const readerPage = reader.page;
     readerPage.on('dialog', (dialog) => {
       dialogs.push(dialog.message());

@@ -1,25 +1,13 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, openPage } from './support/browser';
+import { describe, expect, it } from 'vitest';
+import { useAppUnderTest } from './support/app-under-test';
+import { openPage } from './support/browser';
 import { demo, signIn, signOut } from './support/flows';
-import { startServer, type RunningServer } from './support/server';
 
 describe('sign-in, roles and invitations in the built app', () => {
-  let server: RunningServer;
-  let browser: Browser;
-
-  beforeAll(async () => {
-    server = await startServer();
-    browser = await launchBrowser();
-  });
-
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const app = useAppUnderTest();
 
   it('a reader reaches the library; an admin invites a colleague who joins through the mailed link', async () => {
-    const { context, page, problems } = await openPage(browser, server.baseUrl);
+    const { context, page, problems } = await openPage(app.browser, app.server.baseUrl);
     try {
       // A protected page sends an anonymous visitor to sign-in and back afterwards.
       await page.goto('/library');
@@ -68,7 +56,7 @@ describe('sign-in, roles and invitations in the built app', () => {
       await message.getByText(invitee.email).first().waitFor();
       const link = message.getByRole('link', { name: /\/accept-invite\?token=/ });
       const href = await link.getAttribute('href');
-      expect(href).toMatch(new RegExp(`^${server.baseUrl}/accept-invite\\?token=`));
+      expect(href).toMatch(new RegExp(`^${app.server.baseUrl}/accept-invite\\?token=`));
 
       await link.click();
       await page.waitForURL(/\/accept-invite\?token=/);
@@ -87,7 +75,7 @@ describe('sign-in, roles and invitations in the built app', () => {
 
       expect(problems.filter((line) => !/status of 401/.test(line))).toEqual([]);
     } catch (error) {
-      throw new Error(`${error instanceof Error ? error.message : String(error)}\n--- server output ---\n${server.output()}`, { cause: error });
+      throw new Error(`${error instanceof Error ? error.message : String(error)}\n--- server output ---\n${app.server.output()}`, { cause: error });
     } finally {
       await context.close();
     }
