@@ -22,3 +22,4 @@ export * from './library/search.js';
 export * from './library/lifecycle.js';
 export * from './records/records.js';
 export * from './records/impact.js';
+export * from './method-designs/index.js';

@@ -34,11 +34,20 @@ export const evaluationResultSchema = z.object({
 });
 export type EvaluationResult = z.infer<typeof evaluationResultSchema>;
 
+const methodVersionSchema = z
+  .number({ message: 'Method version is a whole number' })
+  .int('Method version is a whole number')
+  .min(1, 'Method versions start at 1')
+  .nullable()
+  .optional();
+
 export const evaluateRequestSchema = z.strictObject({
   inputs: z.record(z.string(), z.unknown(), { message: 'Inputs must be an object' }),
   unit: lengthUnitSchema.default('mm'),
   /** A calculator block's acceptance rule, judged on the server beside the method's own checks. */
   acceptance: acceptanceRuleSchema.optional(),
+  /** In-house methods: the released version to evaluate (a calculator block's pin); null or absent = the latest release. */
+  methodVersion: methodVersionSchema,
 });
 export type EvaluateRequest = z.input<typeof evaluateRequestSchema>;
 
@@ -52,6 +61,7 @@ export const batchEvaluateRequestSchema = z.strictObject({
         inputs: z.record(z.string(), z.unknown(), { message: 'Inputs must be an object' }),
         unit: lengthUnitSchema.default('mm'),
         acceptance: acceptanceRuleSchema.optional(),
+        methodVersion: methodVersionSchema,
       }),
       { message: 'Items must be a list' },
     )
@@ -79,9 +89,14 @@ export const outputDescriptionSchema = z.object({
 });
 export type OutputDescription = z.infer<typeof outputDescriptionSchema>;
 
+export const methodSources = ['built-in', 'in-house'] as const;
+
 export const methodSummarySchema = z.object({
   id: z.string(),
+  /** Built-ins: the engine's version. In-house (`house:*`): the latest released version. */
   version: z.number().int(),
+  /** Built into Limitbook, or designed by the team (ids `house:<slug>`); absent means built-in. */
+  source: z.enum(methodSources).optional(),
   title: z.string(),
   description: z.string(),
   /** Published sources the method follows, for the catalog and the derivation footer. */
