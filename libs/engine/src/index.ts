@@ -5,3 +5,4 @@ export * from './core/judge-acceptance.js';
 export * from './registry.js';
 export * from './stack/index.js';
 export * from './formula/index.js';
+export * from './in-house/index.js';
