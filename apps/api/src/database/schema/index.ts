@@ -10,3 +10,4 @@ export * from './stored-files.js';
 export * from './page-watches.js';
 export * from './calculation-records.js';
 export * from './impact-reports.js';
+export * from './method-designs.js';
