@@ -2,6 +2,7 @@ import { type NextFunction, type Request, type Response } from 'express';
 import { type NestExpressApplication } from '@nestjs/platform-express';
 import { NestFactory } from '@nestjs/core';
 import cookieParser from 'cookie-parser';
+import { documentLimits } from '@limitbook/editor-schema';
 import swaggerUiDist from 'swagger-ui-dist';
 import { AppModule, type AppOptions } from './app.module.js';
 import { toErrorBody } from './common/errors/error-body.js';
@@ -9,7 +10,12 @@ import { GLOBAL_PREFIX } from './common/openapi/route-catalog.js';
 import { type ResolvedConfig } from './config/config.module.js';
 import { SWAGGER_ASSETS_PATH } from './modules/docs/docs.controller.js';
 
-export const JSON_BODY_LIMIT = '1mb';
+/**
+ * Bytes of JSON a request may carry: the editor's page limit plus room for the fields around the
+ * document (title, version, note), so a page over its limit gets the schema's specific 400 and only
+ * a body well past it is cut off with 413 before it is parsed.
+ */
+export const JSON_BODY_LIMIT = documentLimits.maxJsonBytes + 256 * 1024;
 
 /**
  * Everything main and the tests share. The app must be created with `bodyParser: false`:

@@ -1,6 +1,7 @@
 import { type Role, roles } from '@limitbook/contracts';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { z } from 'zod';
+import { JSON_BODY_LIMIT } from '../../app.setup.js';
 import { createTestApp, type TestApp } from '../../testing/test-app.js';
 import { routesOf, type RouteEntry } from '../openapi/route-catalog.js';
 
@@ -74,7 +75,7 @@ describe('bad input on every route that takes input', () => {
         expectError(`${name} unknown field`, await call(route).send({ unexpectedField: 1 }), 400, 'VALIDATION_FAILED', ['unexpectedField']);
         expectError(`${name} malformed JSON`, await call(route).set('Content-Type', 'application/json').send('{"email": "a@b.example", '), 400, 'MALFORMED_JSON');
         expectError(`${name} not JSON`, await call(route).set('Content-Type', 'text/plain').send('email=a@b.example'), 400, 'VALIDATION_FAILED');
-        expectError(`${name} oversize`, await call(route).send({ padding: 'x'.repeat(1_100_000) }), 413, 'PAYLOAD_TOO_LARGE');
+        expectError(`${name} oversize`, await call(route).send({ padding: 'x'.repeat(JSON_BODY_LIMIT) }), 413, 'PAYLOAD_TOO_LARGE');
       }
       if (route.inputs.query) {
         const properties = inputSchema(route.inputs.query).properties ?? {};

@@ -1,6 +1,7 @@
 import { type Collection, type DraftConflictBody, type ErrorBody, type Page, type PageList } from '@limitbook/contracts';
 import { everyNodeDocument } from '@limitbook/editor-schema/testing';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { JSON_BODY_LIMIT } from '../../app.setup.js';
 import { createTestApp, type TestApp } from '../../testing/test-app.js';
 import { releasePage } from './testing/release-page.js';
 
@@ -101,7 +102,7 @@ describe('pages over HTTP', () => {
     });
 
     it('refuses a body over the request size limit with 413 and a hostile body on create with 400', async () => {
-      const huge = doc(paragraph('x'.repeat(1_100_000)));
+      const huge = doc(paragraph('x'.repeat(JSON_BODY_LIMIT)));
       const tooLarge = await t.http.put(`/api/pages/${page.id}/draft`).set(as(author)).send({ baseVersion: 2, title: 'Huge', document: huge }).expect(413);
       expect((tooLarge.body as ErrorBody).code).toBe('PAYLOAD_TOO_LARGE');
       const before = await t.rowCounts();
