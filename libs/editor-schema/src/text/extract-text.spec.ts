@@ -10,7 +10,6 @@ describe('extractText', () => {
     expect(lines[0]).toBe('TH-DS-204 Cross-drilled ports near a bore');
     expect(lines).toContain('Purpose');
     expect(lines).toContain('Minimum wall is checked at LMC — not assumed; see ASME Y14.5, TH-DS-101 or the standards office');
-    expect(lines).toContain('Evaluate with minWall where .');
   });
 
   it('picks up lists, quotes, code, table cells and cautions', () => {
@@ -26,11 +25,20 @@ describe('extractText', () => {
     expect(lines).toContain('port-wall-study.pdf');
   });
 
-  it('leaves math out unless asked', () => {
-    expect(text).not.toContain('\\frac');
-    const withMath = extractText(everyNodeDocument(), { includeMath: true });
-    expect(withMath).toContain('W_{min} = \\frac{D_{LMC}}{2} - \\frac{d_{LMC}}{2} - t');
-    expect(withMath).toContain('Evaluate with minWall where t_{min}');
+  it('keeps the LaTeX source of inline and block math, set apart by spaces, so formulas are searchable', () => {
+    expect(lines).toContain('W_{min} = \\frac{D_{LMC}}{2} - \\frac{d_{LMC}}{2} - t');
+    expect(lines).toContain('Evaluate with minWall where t_{min} = \\tfrac{D_{LMC} - d_{LMC}}{2} - \\tfrac{t_{pos}}{2} .');
+  });
+
+  it('does not glue inline math to the words around it', () => {
+    const paragraph = { type: 'paragraph', content: [{ type: 'text', text: 'a gap of' }, { type: 'inlineMath', attrs: { latex: 'G_{min}' } }, { type: 'text', text: 'between' }] };
+    expect(extractText({ type: 'doc', content: [paragraph] })).toBe('a gap of G_{min} between');
+  });
+
+  it('leaves math out when asked', () => {
+    const withoutMath = extractText(everyNodeDocument(), { includeMath: false });
+    expect(withoutMath).not.toContain('\\frac');
+    expect(withoutMath.split('\n')).toContain('Evaluate with minWall where .');
   });
 
   it('returns nothing for an empty page', () => {

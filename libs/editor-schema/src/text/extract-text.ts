@@ -1,7 +1,10 @@
 import type { JSONContent } from '@tiptap/core';
 
 export interface ExtractTextOptions {
-  /** Include the LaTeX source of math nodes; off by default because it is noise to a search index. */
+  /**
+   * Include the LaTeX source of math nodes, as written, set apart by spaces (default): a symbol
+   * that only appears in a formula is still found, and snippets have no holes where formulas stood.
+   */
   includeMath?: boolean;
 }
 
@@ -30,7 +33,8 @@ function blockAttributeText(node: JSONContent, includeMath: boolean): string[] {
 function inlineText(node: JSONContent, includeMath: boolean): string {
   if (node.type === 'text') return node.text ?? '';
   if (node.type === 'hardBreak') return '\n';
-  if (node.type === 'inlineMath' && includeMath) return ` ${nonBlank(node.attrs?.latex).join('')} `;
+  // Spaces either side either way, so the words around a formula never run together.
+  if (node.type === 'inlineMath') return includeMath ? ` ${nonBlank(node.attrs?.latex).join('')} ` : ' ';
   return '';
 }
 
@@ -46,12 +50,12 @@ function collectLines(node: JSONContent, includeMath: boolean, lines: string[]):
 
 /**
  * Plain text of a page for full-text search: the text of headings, paragraphs, lists,
- * tables, code and cautions, calculator block captions, image alt texts and attachment
- * names, one block per line.
+ * tables, code and cautions, the LaTeX source of formulas, calculator block captions,
+ * image alt texts and attachment names, one block per line.
  */
 export function extractText(doc: JSONContent, options: ExtractTextOptions = {}): string {
   const lines: string[] = [];
-  collectLines(doc, options.includeMath ?? false, lines);
+  collectLines(doc, options.includeMath ?? true, lines);
   return lines
     .flatMap((line) => line.split('\n'))
     .map((line) => line.replace(/\s+/g, ' ').trim())

@@ -52,6 +52,10 @@ describe('GET /api/search', () => {
       paragraph('Go and no-go plugs for every port bore.'),
       calculator('7d9f0a11-5c3e-4b2a-9e8f-1a2b3c4d5e6f', 'Zircotherm sleeve wall at worst-case offset'),
     ], ['gauge']);
+    await publish('QY-SEA-320', seals, 'Gland wall under pressure', [
+      { type: 'paragraph', content: [text('The pressure at which the wall fails,'), { type: 'inlineMath', attrs: { latex: 'p_{burst} = \\frac{2\\,t\\,S}{d}' } }, text(', must exceed the proof pressure.')] },
+      { type: 'blockMath', attrs: { latex: 't_{req} = \\frac{p\\,d}{2\\,\\kappa\\,S}' } },
+    ]);
     const draftOnly = (await t.http
       .post('/api/pages')
       .set(as(author))
@@ -77,6 +81,15 @@ describe('GET /api/search', () => {
     const result = await search({ q: 'zircotherm sleeves' });
     expect(result.items.map((item) => item.documentNumber)).toEqual(['QX-GAU-500']);
     expect(highlighted(result.items[0]!.snippet, result.items[0]!.highlights)).toEqual(['Zircotherm sleeve']);
+  });
+
+  it('finds a symbol that only appears in a formula, and the snippet keeps the formula in its place', async () => {
+    const inline = await search({ q: 'burst' });
+    expect(inline.items.map((item) => item.documentNumber)).toEqual(['QY-SEA-320']);
+    const [hit] = inline.items as [SearchHit];
+    expect(hit.snippet).toContain('pressure at which the wall fails, p_{burst} = \\frac{2\\,t\\,S}{d} , must exceed the proof pressure.');
+    expect(highlighted(hit.snippet, hit.highlights)).toEqual(['burst']);
+    expect((await search({ q: 'kappa' })).items.map((item) => item.documentNumber)).toEqual(['QY-SEA-320']);
   });
 
   it('finds a page by its document number, whole or by its beginning, before text hits', async () => {
