@@ -15,6 +15,7 @@ export * from './methods/wall-thickness.js';
 export * from './methods/fastener.js';
 export * from './methods/iso286.js';
 export * from './methods/iso2768.js';
+export * from './methods/position-check.js';
 export * from './library/collections.js';
 export * from './library/pages.js';
 export * from './library/files.js';

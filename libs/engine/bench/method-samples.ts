@@ -27,6 +27,22 @@ export const methodSamples: Record<string, Record<string, unknown>> = {
     trials: 10_000,
     seed: 1,
   },
+  // Eight holes on a Ø120 circle, all 0.06 off in x: conform only with the pattern shifted by the datum bore's MMB departure.
+  'position-check': {
+    featureType: 'internal',
+    lowerLimit: 10.5,
+    upperLimit: 10.68,
+    positionTolerance: 0.1,
+    toleranceModifier: 'MMC',
+    datum: { featureType: 'internal', lowerLimit: 40, upperLimit: 40.025, actualSize: 40.025 },
+    datumModifier: 'MMB',
+    features: Array.from({ length: 8 }, (_, index) => {
+      const angle = (index * Math.PI) / 4;
+      const basicX = 60 * Math.cos(angle);
+      const basicY = 60 * Math.sin(angle);
+      return { label: `H${index + 1}`, basicX, basicY, measuredX: basicX + 0.06, measuredY: basicY, actualSize: 10.5 };
+    }),
+  },
   formula: {
     expressions: ['squeeze = (grooveDepth - (crossSection - compression)) ', 'ratio = compression / crossSection * 100'],
     values: { grooveDepth: '2.6 mm', crossSection: '3.53 mm', compression: '0.8 mm' },

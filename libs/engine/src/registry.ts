@@ -9,6 +9,7 @@ import { iso286FitMethod } from './iso286/index.js';
 import { iso2768AngularMethod, iso2768GeometricMethod, iso2768Method } from './iso2768/index.js';
 import { formulaMethod } from './formula/index.js';
 import { stack1dMethod } from './stack/index.js';
+import { positionCheckMethod } from './position/index.js';
 
 // Each concept folder exports its method definitions; add them here, one line per method.
 export const builtInMethods: readonly MethodDefinition[] = [
@@ -21,6 +22,7 @@ export const builtInMethods: readonly MethodDefinition[] = [
   iso2768AngularMethod,
   iso2768GeometricMethod,
   stack1dMethod,
+  positionCheckMethod,
   formulaMethod,
 ] as const;
 
