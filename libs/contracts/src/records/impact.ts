@@ -46,3 +46,26 @@ export const impactReportSchema = z.object({
   createdAt: z.string(),
 });
 export type ImpactReport = z.infer<typeof impactReportSchema>;
+
+/**
+ * The impact check of a release (`GET /api/pages/:id/revisions/:revisionId/impact`): `none` when
+ * the revision replaced no earlier release (nothing to check), `pending` while the check that
+ * runs after approval has not stored its report yet, `ready` with the latest report.
+ */
+export const releaseImpactSchema = z.object({
+  status: z.enum(['none', 'pending', 'ready']),
+  report: impactReportSchema.nullable(),
+});
+export type ReleaseImpact = z.infer<typeof releaseImpactSchema>;
+
+/** A later release under which one record comes out differently (`GET /api/records/:id/impact`). */
+export const recordImpactSchema = z.object({
+  reportId: z.string(),
+  toRevision: z.object({ id: z.string(), revisionLetter: z.string().nullable() }),
+  checkedAt: z.string(),
+  before: impactOutcomeSchema,
+  after: impactOutcomeSchema,
+});
+export type RecordImpact = z.infer<typeof recordImpactSchema>;
+export const recordImpactListSchema = z.object({ items: z.array(recordImpactSchema) });
+export type RecordImpactList = z.infer<typeof recordImpactListSchema>;

@@ -35,8 +35,11 @@ export type CreateRecordRequest = z.input<typeof createRecordRequestSchema>;
 export const calculationRecordSchema = z.object({
   id: z.string(),
   page: z.object({ id: z.string(), documentNumber: z.string(), title: z.string() }),
-  /** `sequence` counts the page's revisions from 1; `state` is the revision's state now, not when recorded. */
-  revision: z.object({ id: z.string(), sequence: z.number().int(), state: z.string() }),
+  /**
+   * `sequence` counts the page's revisions from 1; `revisionLetter` is the release letter the record
+   * cites (records are made on released revisions); `state` is the revision's state now, not when recorded.
+   */
+  revision: z.object({ id: z.string(), sequence: z.number().int(), revisionLetter: z.string().nullable(), state: z.string() }),
   blockId: z.string(),
   method: z.string(),
   methodVersion: z.number().int(),
@@ -66,6 +69,16 @@ export const recordFilterSchema = z.strictObject({
   verdict: z.enum(recordVerdictFilters, { message: 'Verdict is pass, fail or none' }).optional(),
   from: isoDateTime.optional(),
   to: isoDateTime.optional(),
+  /** Document numbers containing this text (case-insensitive). */
+  documentNumber: z.string({ message: 'Document number is text' }).trim().max(40, 'Document number is at most 40 characters').optional(),
+  /** Only these records: ids separated by commas (a selection to export). */
+  ids: z
+    .string({ message: 'Ids are text' })
+    .transform((text) => [...new Set(text.split(',').map((id) => id.trim()).filter(Boolean))])
+    .pipe(z.array(uuidSchema).min(1, 'Give at least one id').max(200, 'Export at most 200 records by id'))
+    .optional(),
+  /** Part number, drawing or note containing this text (case-insensitive). */
+  reference: z.string({ message: 'Reference is text' }).trim().max(100, 'Reference text is at most 100 characters').optional(),
 });
 export type RecordFilter = z.infer<typeof recordFilterSchema>;
 

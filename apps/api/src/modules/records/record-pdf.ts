@@ -113,7 +113,7 @@ export function renderRecordPdf(record: CalculationRecord, options: { compress?:
     record.reference.note ? `Note: ${record.reference.note}` : null,
   ].filter((line): line is string => line !== null);
   const header: [string, string][] = [
-    ['Page revision', `${record.revision.sequence} (${record.revision.state})`],
+    ['Page revision', record.revision.revisionLetter ? `Rev. ${record.revision.revisionLetter} (${record.revision.state})` : `${record.revision.sequence} (${record.revision.state})`],
     ['Calculator block', record.blockId],
     ['Method', `${record.method}, version ${record.methodVersion}`],
     ['Recorded by', record.createdBy ? `${record.createdBy.name} <${record.createdBy.email}>` : 'a former user'],

@@ -7,11 +7,15 @@ import {
   impactReportSchema,
   recordFilterSchema,
   recordListQuerySchema,
+  recordImpactListSchema,
   recordListSchema,
+  releaseImpactSchema,
+  revisionParamsSchema,
   type CreateRecordRequest,
   type ImpactCheckRequest,
   type RecordFilter,
   type RecordListQuery,
+  type RevisionParams,
 } from '@limitbook/contracts';
 import { AnySignedIn, CurrentUser, Roles } from '../../common/auth/access.decorators.js';
 import { type AuthUser } from '../../common/auth/auth-user.js';
@@ -52,6 +56,12 @@ export class RecordsController {
     return new StreamableFile(file, { type: 'application/pdf', disposition: `attachment; filename="${filename}"`, length: file.length });
   }
 
+  @Get(':id/impact')
+  @ApiContract({ summary: 'Later releases under which this record comes out differently (from their impact checks)', response: recordImpactListSchema, tag: 'Records' })
+  impact(@ValidParams(idParamSchema) params: { id: string }) {
+    return this.records.recordImpact(params.id);
+  }
+
   @Get(':id')
   @ApiContract({ summary: 'One record: what its permalink shows', response: calculationRecordSchema, tag: 'Records' })
   get(@ValidParams(idParamSchema) params: { id: string }) {
@@ -75,6 +85,17 @@ export class ImpactController {
   })
   check(@CurrentUser() actor: AuthUser, @ValidParams(idParamSchema) params: { id: string }, @ValidBody(impactCheckRequestSchema) body: ImpactCheckRequest) {
     return this.records.checkImpact(params.id, body.fromRevisionId, body.toRevisionId, actor);
+  }
+
+  @Get('pages/:id/revisions/:revisionId/impact')
+  @Roles('author', 'reviewer', 'admin')
+  @ApiContract({
+    summary: "A release's impact check: `pending` while the check run by the approval is still working, `none` for a first release",
+    response: releaseImpactSchema,
+    tag: 'Records',
+  })
+  releaseImpact(@ValidParams(revisionParamsSchema) params: RevisionParams) {
+    return this.records.releaseImpact(params.id, params.revisionId);
   }
 
   @Get('impact-reports/:id')

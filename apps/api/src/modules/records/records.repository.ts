@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { type RecordFilter } from '@limitbook/contracts';
-import { and, asc, count, desc, eq, gt, gte, inArray, isNotNull, isNull, lte, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gt, gte, ilike, inArray, isNotNull, isNull, lt, lte, or, sql, type SQL } from 'drizzle-orm';
 import { DRIZZLE } from '../../database/database.module.js';
 import { type Database, type Executor } from '../../database/database.js';
 import {
@@ -27,6 +27,7 @@ export interface RecordView {
   documentNumber: string;
   revisionTitle: string;
   revisionSequence: number;
+  revisionLetter: string | null;
   revisionState: string;
   creator: PersonColumns | null;
 }
@@ -78,6 +79,7 @@ export class RecordsRepository {
         documentNumber: pages.documentNumber,
         revisionTitle: pageRevisions.title,
         revisionSequence: pageRevisions.sequence,
+        revisionLetter: pageRevisions.revisionLetter,
         revisionState: pageRevisions.state,
         creatorId: users.id,
         creatorName: users.name,
@@ -98,7 +100,7 @@ export class RecordsRepository {
     const where = this.where(filter);
     const [rows, [totals]] = await Promise.all([
       this.viewQuery().where(where).orderBy(desc(calculationRecords.createdAt), desc(calculationRecords.id)).limit(limit).offset(offset),
-      this.db.select({ total: count() }).from(calculationRecords).where(where),
+      this.db.select({ total: count() }).from(calculationRecords).innerJoin(pages, eq(pages.id, calculationRecords.pageId)).where(where),
     ]);
     return { rows: rows.map(toView), total: totals?.total ?? 0 };
   }
@@ -107,6 +109,7 @@ export class RecordsRepository {
     const conditions: SQL[] = [];
     if (filter.ownerId) conditions.push(eq(calculationRecords.createdBy, filter.ownerId));
     if (filter.pageId) conditions.push(eq(calculationRecords.pageId, filter.pageId));
+    if (filter.ids) conditions.push(inArray(calculationRecords.id, filter.ids));
     if (filter.method) conditions.push(eq(calculationRecords.methodId, filter.method));
     if (filter.verdict === 'none') conditions.push(isNull(calculationRecords.verdict));
     if (filter.verdict === 'pass' || filter.verdict === 'fail') {
@@ -115,6 +118,17 @@ export class RecordsRepository {
     }
     if (filter.from) conditions.push(gte(calculationRecords.createdAt, new Date(filter.from)));
     if (filter.to) conditions.push(lte(calculationRecords.createdAt, new Date(filter.to)));
+    if (filter.documentNumber) conditions.push(ilike(pages.documentNumber, `%${escapeLike(filter.documentNumber)}%`));
+    if (filter.reference) {
+      const pattern = `%${escapeLike(filter.reference)}%`;
+      conditions.push(
+        or(
+          ilike(sql`${calculationRecords.reference}->>'partNumber'`, pattern),
+          ilike(sql`${calculationRecords.reference}->>'drawing'`, pattern),
+          ilike(sql`${calculationRecords.reference}->>'note'`, pattern),
+        )!,
+      );
+    }
     return conditions.length > 0 ? and(...conditions) : undefined;
   }
 
@@ -145,6 +159,39 @@ export class RecordsRepository {
     return { report: row.report, creator: person(row) };
   }
 
+  /** The latest report of the check from one revision to another. */
+  async latestImpactReport(fromRevisionId: string, toRevisionId: string): Promise<{ report: ImpactReportRow; creator: PersonColumns | null } | undefined> {
+    const [row] = await this.db
+      .select({ report: impactReports, creatorId: users.id, creatorName: users.name, creatorEmail: users.email })
+      .from(impactReports)
+      .leftJoin(users, eq(users.id, impactReports.createdBy))
+      .where(and(eq(impactReports.fromRevisionId, fromRevisionId), eq(impactReports.toRevisionId, toRevisionId)))
+      .orderBy(desc(impactReports.createdAt), desc(impactReports.id))
+      .limit(1);
+    return row ? { report: row.report, creator: person(row) } : undefined;
+  }
+
+  /** The release that the revision with this sequence replaced: the latest one before it. */
+  async releaseBefore(pageId: string, sequence: number): Promise<string | undefined> {
+    const [row] = await this.db
+      .select({ id: pageRevisions.id })
+      .from(pageRevisions)
+      .where(and(eq(pageRevisions.pageId, pageId), lt(pageRevisions.sequence, sequence), isNotNull(pageRevisions.revisionLetter)))
+      .orderBy(desc(pageRevisions.sequence))
+      .limit(1);
+    return row?.id;
+  }
+
+  /** The reports listing this record among the affected ones, newest first, with the letter of the revision checked against. */
+  async impactReportsListing(recordId: string, fromRevisionId: string): Promise<{ report: ImpactReportRow; toRevisionLetter: string | null }[]> {
+    return this.db
+      .select({ report: impactReports, toRevisionLetter: pageRevisions.revisionLetter })
+      .from(impactReports)
+      .innerJoin(pageRevisions, eq(pageRevisions.id, impactReports.toRevisionId))
+      .where(and(eq(impactReports.fromRevisionId, fromRevisionId), sql`${impactReports.affected} @> ${JSON.stringify([{ recordId }])}::jsonb`))
+      .orderBy(desc(impactReports.createdAt), desc(impactReports.id));
+  }
+
   async findPerson(id: string): Promise<PersonColumns | null> {
     const [row] = await this.db.select({ id: users.id, name: users.name, email: users.email }).from(users).where(eq(users.id, id));
     return row ?? null;
@@ -160,6 +207,7 @@ function toView(row: {
   documentNumber: string;
   revisionTitle: string;
   revisionSequence: number;
+  revisionLetter: string | null;
   revisionState: string;
   creatorId: string | null;
   creatorName: string | null;
@@ -170,7 +218,13 @@ function toView(row: {
     documentNumber: row.documentNumber,
     revisionTitle: row.revisionTitle,
     revisionSequence: row.revisionSequence,
+    revisionLetter: row.revisionLetter,
     revisionState: row.revisionState,
     creator: person(row),
   };
+}
+
+/** `%` and `_` typed by a user are literal characters, not wildcards. */
+function escapeLike(text: string): string {
+  return text.replace(/[\\%_]/g, (char) => `\\${char}`);
 }

@@ -7,6 +7,8 @@ import {
   type ImpactEntry,
   type ImpactReport,
   type RecordFilter,
+  type RecordImpactList,
+  type ReleaseImpact,
   type RecordList,
   type RecordListQuery,
   type Role,
@@ -150,7 +152,7 @@ export class RecordsService {
         view.creator?.email,
         view.documentNumber,
         view.revisionTitle,
-        view.revisionSequence,
+        view.revisionLetter ?? view.revisionSequence,
         record.blockId,
         record.methodId,
         record.methodVersion,
@@ -249,6 +251,38 @@ export class RecordsService {
     });
     this.mailOwners(to, affectedViews);
     return toImpactReport(row, actor ? { id: actor.id, name: actor.name, email: actor.email } : null);
+  }
+
+  /** The impact check of a release: stored, still running after approval, or not needed (first release). */
+  async releaseImpact(pageId: string, revisionId: string): Promise<ReleaseImpact> {
+    const revision = await this.repository.findRevision(pageId, revisionId);
+    if (!revision || !['released', 'superseded'].includes(revision.state)) throw RecordsException.of('revision-not-found');
+    const previous = await this.repository.releaseBefore(pageId, revision.sequence);
+    if (!previous) return { status: 'none', report: null };
+    const found = await this.repository.latestImpactReport(previous, revisionId);
+    return found ? { status: 'ready', report: toImpactReport(found.report, found.creator) } : { status: 'pending', report: null };
+  }
+
+  /** Later releases under which this record comes out differently; the latest check per release. */
+  async recordImpact(id: string): Promise<RecordImpactList> {
+    const view = await this.repository.find(id);
+    if (!view) throw RecordsException.of('record-not-found');
+    const seen = new Set<string>();
+    const items: RecordImpactList['items'] = [];
+    for (const { report, toRevisionLetter } of await this.repository.impactReportsListing(id, view.record.revisionId)) {
+      if (seen.has(report.toRevisionId)) continue;
+      seen.add(report.toRevisionId);
+      const entry = report.affected.find((affected) => affected.recordId === id);
+      if (!entry) continue;
+      items.push({
+        reportId: report.id,
+        toRevision: { id: report.toRevisionId, revisionLetter: toRevisionLetter },
+        checkedAt: report.createdAt.toISOString(),
+        before: entry.before,
+        after: entry.after,
+      });
+    }
+    return { items };
   }
 
   async getImpactReport(id: string): Promise<ImpactReport> {

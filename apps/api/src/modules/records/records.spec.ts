@@ -1,6 +1,8 @@
 import { inflateSync } from 'node:zlib';
-import { type CalculationRecord, type Collection, type ErrorBody, type ImpactReport, type Page, type RecordList } from '@limitbook/contracts';
+import { type CalculationRecord, type Collection, type ErrorBody, type ImpactReport, type Page, type RecordImpactList, type RecordList, type ReleaseImpact } from '@limitbook/contracts';
+import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { impactReports } from '../../database/schema/index.js';
 import { releasePage } from '../library/testing/release-page.js';
 import { createTestApp, type TestApp } from '../../testing/test-app.js';
 import { RecordsService } from './records.service.js';
@@ -149,6 +151,8 @@ describe('calculation records over HTTP', () => {
     const record = records['pass4.8']!;
     const response = await t.http.get(`/api/records/${record.id}`).set(as(reviewer)).expect(200);
     expect(response.body).toEqual(record);
+    // A record cites the release by its letter, as a drawing would.
+    expect(record.revision).toMatchObject({ id: revisionA, revisionLetter: 'A', state: 'released' });
     await t.http.get('/api/records/00000000-0000-4000-8000-000000000000').set(as(reader)).expect(404);
   });
 
@@ -166,6 +170,26 @@ describe('calculation records over HTTP', () => {
     await t.http.get('/api/records?scope=all').set(as(reader)).expect(403);
     const all = (await t.http.get('/api/records?scope=all').set(as(admin)).expect(200)).body as RecordList;
     expect(all.total).toBe(5);
+    const byNumber = (await t.http.get('/api/records?documentNumber=tst-rec').set(as(reader)).expect(200)).body as RecordList;
+    expect(byNumber.total).toBe(3);
+    expect(((await t.http.get('/api/records?documentNumber=TST-OTHER').set(as(reader)).expect(200)).body as RecordList).total).toBe(0);
+    const byPart = (await t.http.get('/api/records?reference=p-1').set(as(reader)).expect(200)).body as RecordList;
+    expect(byPart.items.map((item) => item.id)).toEqual([records['pass4.8']!.id]);
+    const byNote = (await t.http.get('/api/records?reference=FIRST%20art').set(as(reader)).expect(200)).body as RecordList;
+    expect(byNote.items.map((item) => item.id)).toEqual([records['pass4.8']!.id]);
+    // A typed % is a character, not a wildcard.
+    expect(((await t.http.get('/api/records?reference=%25').set(as(reader)).expect(200)).body as RecordList).total).toBe(0);
+    const csv = await t.http.get('/api/records/export.csv?reference=p-100').set(as(reader)).expect(200);
+    expect((csv.text as string).trimEnd().split('\r\n')).toHaveLength(2);
+    const picked = [records['pass4.8']!.id, records['pass4.9']!.id];
+    const selection = await t.http.get(`/api/records/export.csv?ids=${picked.join(',')}`).set(as(reader)).expect(200);
+    const selectedLines = (selection.text as string).trimEnd().split('\r\n').slice(1);
+    expect(selectedLines.map((line) => line.split(',')[0]).sort()).toEqual([...picked].sort());
+    // Someone else's record id in the selection is not exported: the owner scope still applies.
+    const others = await t.http.get(`/api/records/export.csv?ids=${records['pass1.6']!.id}`).set(as(reader)).expect(200);
+    expect((others.text as string).trimEnd().split('\r\n')).toHaveLength(1);
+    const badIds = (await t.http.get('/api/records?ids=nope').set(as(reader)).expect(400)).body as ErrorBody;
+    expect(Object.keys(badIds.fields ?? {})[0]).toMatch(/^ids/);
     const badQuery = (await t.http.get('/api/records?verdict=maybe&from=yesterday').set(as(reader)).expect(400)).body as ErrorBody;
     expect(Object.keys(badQuery.fields ?? {}).sort()).toEqual(['from', 'verdict']);
   });
@@ -202,6 +226,7 @@ describe('calculation records over HTTP', () => {
     expect(text).toContain('TST-REC-001 Port wall rule');
     expect(text).toContain(`wall-thickness, version ${record.methodVersion}`);
     expect(text).toContain('P-100');
+    expect(text).toContain('Rev. A (released)');
     expect(text).toContain('PASS');
     expect(text).toContain(record.steps[0]!.label);
     // Formulas are drawn as vector math; the plain-text fallback would bring in Courier.
@@ -214,6 +239,9 @@ describe('calculation records over HTTP', () => {
     let report: ImpactReport;
 
     beforeAll(async () => {
+      // Revision A replaced no release: there was nothing to check.
+      const first = (await t.http.get(`/api/pages/${page.id}/revisions/${revisionA}/impact`).set(as(reviewer)).expect(200)).body as ReleaseImpact;
+      expect(first).toEqual({ status: 'none', report: null });
       // Revision B tightens the rule from minWall ≥ 1.5 to ≥ 4.85.
       await t.http.post(`/api/pages/${page.id}/draft`).set(as(author)).expect(201);
       await t.http
@@ -263,6 +291,35 @@ describe('calculation records over HTTP', () => {
       expect(again.createdBy).toBeNull();
       const unchanged = await t.app.get(RecordsService).checkImpact(page.id, revisionB, revisionB);
       expect(unchanged).toMatchObject({ changedBlocks: [], recordsChecked: 0, affected: [] });
+    });
+
+    it("shows a release's own check to authors, reviewers and admins, and each affected record's owner on the record", async () => {
+      const released = (await t.http.get(`/api/pages/${page.id}/revisions/${revisionB}/impact`).set(as(reviewer)).expect(200)).body as ReleaseImpact;
+      expect(released.status).toBe('ready');
+      expect(released.report?.toRevisionId).toBe(revisionB);
+      expect(released.report?.affected.map((entry) => entry.recordId).sort()).toEqual([records['pass4.8']!.id, records['pass1.6']!.id].sort());
+      await t.http.get(`/api/pages/${page.id}/revisions/${revisionB}/impact`).set(as(author)).expect(200);
+      await t.http.get(`/api/pages/${page.id}/revisions/${revisionB}/impact`).set(as(reader)).expect(403);
+      await t.http.get(`/api/pages/${page.id}/revisions/00000000-0000-4000-8000-000000000000/impact`).set(as(reviewer)).expect(404);
+
+      const listed = (await t.http.get(`/api/records/${records['pass4.8']!.id}/impact`).set(as(reader)).expect(200)).body as RecordImpactList;
+      // Several checks of the same release (the approval's and explicit re-runs) count once.
+      expect(listed.items).toEqual([
+        {
+          reportId: expect.any(String),
+          toRevision: { id: revisionB, revisionLetter: 'B' },
+          checkedAt: expect.any(String),
+          before: { pass: true, keyOutputs: { minWall: 4.8 } },
+          after: { pass: false, keyOutputs: { minWall: 4.8 } },
+        },
+      ]);
+      expect(((await t.http.get(`/api/records/${records['fail1.35']!.id}/impact`).set(as(reader)).expect(200)).body as RecordImpactList).items).toEqual([]);
+      await t.http.get('/api/records/00000000-0000-4000-8000-000000000000/impact').set(as(reader)).expect(404);
+
+      // Until the approval's check has stored its report, the release says it is pending.
+      await t.db.delete(impactReports).where(eq(impactReports.toRevisionId, revisionB));
+      const pending = (await t.http.get(`/api/pages/${page.id}/revisions/${revisionB}/impact`).set(as(admin)).expect(200)).body as ReleaseImpact;
+      expect(pending).toEqual({ status: 'pending', report: null });
     });
 
     it('refuses revisions of another page or the same revision twice', async () => {

@@ -7,7 +7,7 @@ export function toCalculationRecord(view: RecordView): CalculationRecord {
   return {
     id: record.id,
     page: { id: record.pageId, documentNumber: view.documentNumber, title: view.revisionTitle },
-    revision: { id: record.revisionId, sequence: view.revisionSequence, state: view.revisionState },
+    revision: { id: record.revisionId, sequence: view.revisionSequence, revisionLetter: view.revisionLetter, state: view.revisionState },
     blockId: record.blockId,
     method: record.methodId,
     methodVersion: record.methodVersion,
