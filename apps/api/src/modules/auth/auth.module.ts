@@ -3,6 +3,7 @@ import { APP_GUARD } from '@nestjs/core';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
 import { ThrottlerModule } from '@nestjs/throttler';
+import { ActiveUserCache } from '../../common/auth/active-user-cache.js';
 import { JwtAuthGuard } from '../../common/auth/jwt-auth.guard.js';
 import { RolesGuard } from '../../common/auth/roles.guard.js';
 import { APP_CONFIG, type ResolvedConfig } from '../../config/config.module.js';
@@ -38,11 +39,12 @@ import { PasswordService } from './password.service.js';
     PasswordService,
     OneTimeTokenService,
     JwtStrategy,
+    { provide: ActiveUserCache, useFactory: () => new ActiveUserCache() },
     AuthRateLimitGuard,
     // Order matters: authenticate first, then check the role.
     { provide: APP_GUARD, useClass: JwtAuthGuard },
     { provide: APP_GUARD, useClass: RolesGuard },
   ],
-  exports: [AuthService, PasswordService, OneTimeTokenService],
+  exports: [AuthService, PasswordService, OneTimeTokenService, ActiveUserCache],
 })
 export class AuthModule {}

@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { Inject, Injectable, Logger } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { type AcceptInviteRequest, type ResetPasswordRequest, type SignInRequest, type SignInResponse } from '@limitbook/contracts';
+import { ActiveUserCache } from '../../common/auth/active-user-cache.js';
 import { APP_CONFIG, type ResolvedConfig } from '../../config/config.module.js';
 import { type Executor } from '../../database/database.js';
 import { type UserRow } from '../../database/schema/index.js';
@@ -43,6 +44,7 @@ export class AuthService {
     private readonly jwt: JwtService,
     private readonly mail: MailService,
     private readonly audit: AuditService,
+    private readonly activeUsers: ActiveUserCache,
   ) {
     this.successorKey = successorKey(config.jwtSecret);
   }
@@ -96,7 +98,7 @@ export class AuthService {
 
   async resetPassword({ token, password }: ResetPasswordRequest): Promise<void> {
     const passwordHash = await this.passwords.hash(password);
-    await this.repository.transaction(async (tx) => {
+    const userId = await this.repository.transaction(async (tx) => {
       const used = await this.oneTimeTokens.consume(token, 'password_reset', tx);
       if (!used) throw AuthException.of('reset-link-invalid');
       const user = await this.repository.findUserById(used.userId, tx);
@@ -105,19 +107,23 @@ export class AuthService {
       // A reset usually means the old password is suspect: end every session that used it.
       await this.repository.revokeAllForUser(user.id, tx);
       await this.audit.record({ actor: { id: user.id, email: user.email }, action: 'user.password_reset', subjectType: 'user', subjectId: user.id }, tx);
+      return user.id;
     });
+    this.activeUsers.invalidate(userId);
   }
 
   async acceptInvite({ token, name, password }: AcceptInviteRequest): Promise<void> {
     const passwordHash = await this.passwords.hash(password);
-    await this.repository.transaction(async (tx) => {
+    const userId = await this.repository.transaction(async (tx) => {
       const used = await this.oneTimeTokens.consume(token, 'invite', tx);
       if (!used) throw AuthException.of('invite-link-invalid');
       const user = await this.repository.findUserById(used.userId, tx);
       if (!user || user.status !== 'invited') throw AuthException.of('invite-link-invalid');
       await this.repository.updateUser(user.id, { name, passwordHash, status: 'active' }, tx);
       await this.audit.record({ actor: { id: user.id, email: user.email }, action: 'user.invite_accepted', subjectType: 'user', subjectId: user.id }, tx);
+      return user.id;
     });
+    this.activeUsers.invalidate(userId);
   }
 
   /** Ends every session of a user, e.g. on deactivation; pass the caller's transaction. */

@@ -1,5 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { type InviteUserRequest, type PageQuery, type UpdateUserRequest, type User, type UserList, type UserStatus } from '@limitbook/contracts';
+import { ActiveUserCache } from '../../common/auth/active-user-cache.js';
 import { type AuthUser } from '../../common/auth/auth-user.js';
 import { APP_CONFIG, type ResolvedConfig } from '../../config/config.module.js';
 import { AuditService } from '../audit/audit.service.js';
@@ -20,6 +21,7 @@ export class UsersService {
     private readonly oneTimeTokens: OneTimeTokenService,
     private readonly mail: MailService,
     private readonly audit: AuditService,
+    private readonly activeUsers: ActiveUserCache,
   ) {}
 
   async list(query: PageQuery): Promise<UserList> {
@@ -48,6 +50,15 @@ export class UsersService {
   }
 
   async update(actor: AuthUser, id: string, request: UpdateUserRequest): Promise<User> {
+    try {
+      return await this.applyUpdate(actor, id, request);
+    } finally {
+      // After the commit (or rollback): the guard's next lookup of this user reads the new row.
+      this.activeUsers.invalidate(id);
+    }
+  }
+
+  private async applyUpdate(actor: AuthUser, id: string, request: UpdateUserRequest): Promise<User> {
     return this.repository.transaction(async (tx) => {
       const current = await this.repository.findForUpdate(id, tx);
       if (!current) throw UsersException.of('not-found');

@@ -74,6 +74,28 @@ describe('users (admin)', () => {
     expect(taken.body.fields).toHaveProperty('email');
   });
 
+  describe('changes apply on the very next request of a token already in use', () => {
+    it('refuses a deactivated user at once', async () => {
+      const reader = await byEmail(t.demoPerson('reader').email);
+      const token = await t.signIn('reader');
+      await t.http.get('/api/auth/me').set(bearer(token)).expect(200); // the guard now holds this user
+      await t.http.patch(`/api/users/${reader.id}`).set(bearer(admin)).send({ active: false }).expect(200);
+      await t.http.get('/api/auth/me').set(bearer(token)).expect(401);
+      await t.http.patch(`/api/users/${reader.id}`).set(bearer(admin)).send({ active: true }).expect(200);
+      await t.http.get('/api/auth/me').set(bearer(await t.signIn('reader'))).expect(200);
+    });
+
+    it('applies a role change at once, both ways', async () => {
+      const author = await byEmail(t.demoPerson('author').email);
+      const token = await t.signIn('author');
+      await t.http.get('/api/reviewers').set(bearer(token)).expect(200);
+      await t.http.patch(`/api/users/${author.id}`).set(bearer(admin)).send({ role: 'reader' }).expect(200);
+      await t.http.get('/api/reviewers').set(bearer(token)).expect(403);
+      await t.http.patch(`/api/users/${author.id}`).set(bearer(admin)).send({ role: 'author' }).expect(200);
+      await t.http.get('/api/reviewers').set(bearer(token)).expect(200);
+    });
+  });
+
   it('answers 404 for an unknown user', async () => {
     const response = await t.http.patch('/api/users/0f8e2c53-6a1d-4f4b-9a3e-5b7c2d1e8f90').set(bearer(admin)).send({ name: 'Ghost' }).expect(404);
     expect(response.body.code).toBe('NOT_FOUND');
