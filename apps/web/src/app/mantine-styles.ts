@@ -42,6 +42,8 @@ import '@mantine/core/styles/Fieldset.css';
 import '@mantine/core/styles/ColorSwatch.css';
 import '@mantine/core/styles/Breadcrumbs.css';
 import '@mantine/core/styles/SimpleGrid.css';
+import '@mantine/core/styles/Grid.css';
+import '@mantine/core/styles/Checkbox.css';
 import '@mantine/core/styles/Divider.css';
 import '@mantine/core/styles/Table.css';
 import '@mantine/core/styles/Text.css';

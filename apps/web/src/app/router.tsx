@@ -69,6 +69,36 @@ export const routes: RouteObject[] = [
         ErrorBoundary: RouteError,
       },
       {
+        path: paths.methods.catalog.path,
+        lazy: () => import('./routes/app/methods/catalog').then((m) => ({ Component: m.MethodsCatalogRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.methods.create.path,
+        lazy: () => import('./routes/app/methods/new').then((m) => ({ Component: m.NewMethodRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.methods.method.path,
+        lazy: () => import('./routes/app/methods/method').then((m) => ({ Component: m.MethodRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.methods.design.path,
+        lazy: () => import('./routes/app/methods/design').then((m) => ({ Component: m.MethodDesignRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.methods.review.path,
+        lazy: () => import('./routes/app/methods/review').then((m) => ({ Component: m.MethodReviewRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.methods.compare.path,
+        lazy: () => import('./routes/app/methods/compare').then((m) => ({ Component: m.MethodCompareRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
         path: paths.admin.root.path,
         lazy: () => import('./routes/app/admin/root').then((m) => ({ Component: m.AdminRoot })),
         ErrorBoundary: RouteError,

@@ -7,6 +7,10 @@ function withQuery(path: string, query: Record<string, string | undefined>): str
   return search ? `${path}?${search}` : path;
 }
 
+function methodSegment(methodId: string): string {
+  return encodeURIComponent(methodId).replace(/%3A/gi, ':');
+}
+
 export const paths = {
   root: { path: '/', getHref: () => '/' },
   auth: {
@@ -35,6 +39,18 @@ export const paths = {
     page: { path: '/standards/:documentNumber', getHref: (documentNumber: string) => `/standards/${encodeURIComponent(documentNumber)}` },
     create: { path: '/standards/new', getHref: () => '/standards/new' },
     edit: { path: '/standards/:documentNumber/edit', getHref: (documentNumber: string) => `/standards/${encodeURIComponent(documentNumber)}/edit` },
+  },
+  methods: {
+    catalog: { path: '/methods', getHref: () => '/methods' },
+    create: { path: '/methods/new', getHref: () => '/methods/new' },
+    // In-house ids carry a colon (house:o-ring-squeeze); it is legal in a path segment and reads better unescaped.
+    method: { path: '/methods/:methodId', getHref: (methodId: string) => `/methods/${methodSegment(methodId)}` },
+    design: { path: '/methods/:methodId/design', getHref: (methodId: string) => `/methods/${methodSegment(methodId)}/design` },
+    review: { path: '/methods/:methodId/review', getHref: (methodId: string) => `/methods/${methodSegment(methodId)}/review` },
+    compare: {
+      path: '/methods/:methodId/compare',
+      getHref: (methodId: string, from?: string, to?: string) => withQuery(`/methods/${methodSegment(methodId)}/compare`, { from, to }),
+    },
   },
   admin: {
     root: { path: '/admin', getHref: () => '/admin' },

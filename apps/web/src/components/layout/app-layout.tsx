@@ -1,7 +1,7 @@
 import { AppShell, Avatar, Badge, Burger, Group, Menu, NavLink, Stack, Text, UnstyledButton } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { roleLabels, type SessionUser } from '@limitbook/contracts';
-import { IconBooks, IconChevronDown, IconLogout, IconMail, IconListDetails, IconUsers, type Icon } from '@tabler/icons-react';
+import { IconBooks, IconChevronDown, IconMathFunction, IconLogout, IconMail, IconListDetails, IconUsers, type Icon } from '@tabler/icons-react';
 import { useEffect, type ReactNode } from 'react';
 import { Link, useLocation } from 'react-router-dom';
 import { Logo } from '@/components/brand/logo';
@@ -13,7 +13,13 @@ type NavItem = { label: string; href: string; area: Area; icon: Icon };
 type NavSection = { label: string; items: NavItem[] };
 
 const sections: NavSection[] = [
-  { label: 'Knowledge', items: [{ label: 'Library', href: paths.library.home.getHref(), area: 'library', icon: IconBooks }] },
+  {
+    label: 'Knowledge',
+    items: [
+      { label: 'Library', href: paths.library.home.getHref(), area: 'library', icon: IconBooks },
+      { label: 'Methods', href: paths.methods.catalog.getHref(), area: 'library', icon: IconMathFunction },
+    ],
+  },
   {
     label: 'Admin',
     items: [
