@@ -14,6 +14,7 @@ import { FilesModule } from './modules/files/files.module.js';
 import { HealthModule } from './modules/health/health.module.js';
 import { LibraryModule } from './modules/library/library.module.js';
 import { MailModule } from './modules/mail/mail.module.js';
+import { MeasurementsModule } from './modules/measurements/measurements.module.js';
 import { MethodsModule } from './modules/methods/methods.module.js';
 import { RecordsModule } from './modules/records/records.module.js';
 import { SearchModule } from './modules/search/search.module.js';
@@ -78,6 +79,7 @@ export class AppModule {
         UsersModule,
         HealthModule,
         MethodsModule,
+        MeasurementsModule,
         LibraryModule,
         FilesModule,
         SearchModule,

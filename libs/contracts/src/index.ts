@@ -16,6 +16,7 @@ export * from './methods/fastener.js';
 export * from './methods/iso286.js';
 export * from './methods/iso2768.js';
 export * from './methods/position-check.js';
+export * from './methods/table-import.js';
 export * from './library/collections.js';
 export * from './library/pages.js';
 export * from './library/files.js';
