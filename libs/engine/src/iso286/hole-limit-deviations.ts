@@ -4,6 +4,7 @@ import { lowerDeviationLetters, shaftLowerDeviationRows, shaftUpperDeviationRows
 import { checkCommonRules } from './check-common-rules.js';
 import { type SizeStep } from './find-size-step.js';
 import { type FundamentalDeviationSource, type LimitDeviationsResult } from './limit-deviations.js';
+import { limitsFromFundamental } from './limits-from-fundamental.js';
 import { lookupDeviationCell, requireDeviationCell } from './lookup-deviation-cell.js';
 import { hundredthsFromMicrometres, type MicrometreHundredths } from './micrometre-hundredths.js';
 import { symmetricHalfTolerance } from './symmetric-deviation.js';
@@ -25,24 +26,13 @@ export function holeLimitDeviations(toleranceClass: ToleranceClass, sizeMm: numb
   const rank = gradeRank(toleranceClass.grade);
   const shaftLetter = letter.toLowerCase();
 
-  const fromUpper = (upper: MicrometreHundredths, step: SizeStep, source: FundamentalDeviationSource): LimitDeviationsResult => ({
-    ok: true,
-    value: {
-      toleranceClass, upper, lower: upper - it.value, standardTolerance: it, deviationStep: step,
-      fundamental: { which: 'upper', value: upper, source },
-    },
-  });
+  const fromUpper = (upper: MicrometreHundredths, step: SizeStep, source: FundamentalDeviationSource): LimitDeviationsResult =>
+    limitsFromFundamental(toleranceClass, it, step, { which: 'upper', value: upper, source });
   const notDefined = (message: string): LimitDeviationsResult => ({ ok: false, message: `${designation}: ${message}` });
 
   if (letter === 'JS') {
     const { half, evenRounded } = symmetricHalfTolerance(toleranceClass, it.value);
-    return {
-      ok: true,
-      value: {
-        toleranceClass, upper: half, lower: -half, standardTolerance: it, deviationStep: it.range,
-        fundamental: { which: 'upper', value: half, source: { rule: 'symmetric', evenRounded } },
-      },
-    };
+    return fromUpper(half, it.range, { rule: 'symmetric', evenRounded });
   }
 
   if (letter === 'J') {
@@ -58,13 +48,7 @@ export function holeLimitDeviations(toleranceClass: ToleranceClass, sizeMm: numb
     if (!found.ok) return found;
     const shaftUpper = hundredthsFromMicrometres(found.value);
     const lower = shaftUpper === 0 ? 0 : -shaftUpper;
-    return {
-      ok: true,
-      value: {
-        toleranceClass, upper: lower + it.value, lower, standardTolerance: it, deviationStep: found.step,
-        fundamental: { which: 'lower', value: lower, source: { rule: 'mirror', shaftDeviation: shaftUpper } },
-      },
-    };
+    return limitsFromFundamental(toleranceClass, it, found.step, { which: 'lower', value: lower, source: { rule: 'mirror', shaftDeviation: shaftUpper } });
   }
 
   const lowerColumn = (lowerDeviationLetters as readonly string[]).indexOf(shaftLetter);

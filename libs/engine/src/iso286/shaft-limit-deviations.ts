@@ -9,6 +9,7 @@ import {
 import { checkCommonRules } from './check-common-rules.js';
 import { findSizeStep } from './find-size-step.js';
 import { type LimitDeviationsResult } from './limit-deviations.js';
+import { limitsFromFundamental } from './limits-from-fundamental.js';
 import { lookupDeviationCell, requireDeviationCell } from './lookup-deviation-cell.js';
 import { hundredthsFromMicrometres } from './micrometre-hundredths.js';
 import { symmetricHalfTolerance } from './symmetric-deviation.js';
@@ -24,13 +25,7 @@ export function shaftLimitDeviations(toleranceClass: ToleranceClass, sizeMm: num
 
   if (letter === 'js') {
     const { half, evenRounded } = symmetricHalfTolerance(toleranceClass, it.value);
-    return {
-      ok: true,
-      value: {
-        toleranceClass, upper: half, lower: -half, standardTolerance: it, deviationStep: it.range,
-        fundamental: { which: 'upper', value: half, source: { rule: 'symmetric', evenRounded } },
-      },
-    };
+    return limitsFromFundamental(toleranceClass, it, it.range, { which: 'upper', value: half, source: { rule: 'symmetric', evenRounded } });
   }
 
   if (letter === 'j') {
@@ -48,13 +43,11 @@ export function shaftLimitDeviations(toleranceClass: ToleranceClass, sizeMm: num
     const found = requireDeviationCell(shaftUpperDeviationRows, upperColumn, sizeMm, designation, letter);
     if (!found.ok) return found;
     const upper = hundredthsFromMicrometres(found.value);
-    return {
-      ok: true,
-      value: {
-        toleranceClass, upper, lower: upper - it.value, standardTolerance: it, deviationStep: found.step,
-        fundamental: { which: 'upper', value: upper, source: { rule: 'table', table: 'shaft fundamental deviations a–h (ISO 286-1 Table 2)' } },
-      },
-    };
+    return limitsFromFundamental(toleranceClass, it, found.step, {
+      which: 'upper',
+      value: upper,
+      source: { rule: 'table', table: 'shaft fundamental deviations a–h (ISO 286-1 Table 2)' },
+    });
   }
 
   const lowerColumn = (lowerDeviationLetters as readonly string[]).indexOf(letter);
@@ -70,12 +63,6 @@ export function shaftLimitDeviations(toleranceClass: ToleranceClass, sizeMm: num
   return fromLower(lower, step, table);
 
   function fromLower(lowerDeviation: number, deviationStep: typeof it.range, table: string): LimitDeviationsResult {
-    return {
-      ok: true,
-      value: {
-        toleranceClass, upper: lowerDeviation + it.value, lower: lowerDeviation, standardTolerance: it, deviationStep,
-        fundamental: { which: 'lower', value: lowerDeviation, source: { rule: 'table', table } },
-      },
-    };
+    return limitsFromFundamental(toleranceClass, it, deviationStep, { which: 'lower', value: lowerDeviation, source: { rule: 'table', table } });
   }
 }
