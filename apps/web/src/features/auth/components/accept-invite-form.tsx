@@ -1,4 +1,4 @@
-import { Button, Group, PasswordInput, Stack, TextInput } from '@mantine/core';
+import { Button, Group, Stack, TextInput } from '@mantine/core';
 import { schemaResolver, useForm } from '@mantine/form';
 import { acceptInviteRequestSchema } from '@limitbook/contracts';
 import { useState } from 'react';
@@ -6,6 +6,7 @@ import { applyServerErrors } from '@/components/form/server-errors';
 import { useAcceptInvite } from '../api/accept-invite';
 import { FormAlert } from './form-alert';
 import { matchingPasswords, newPasswordPairSchema } from './new-password-fields';
+import { NewPasswordInputs } from './new-password-inputs';
 
 const schema = matchingPasswords(newPasswordPairSchema.extend({ name: acceptInviteRequestSchema.shape.name }));
 
@@ -40,15 +41,7 @@ export function AcceptInviteForm({ token, onSuccess }: { token: string; onSucces
           key={form.key('name')}
           {...form.getInputProps('name')}
         />
-        <PasswordInput
-          label="Choose a password"
-          description="At least 12 characters. A few unrelated words make a strong passphrase."
-          autoComplete="new-password"
-          required
-          key={form.key('password')}
-          {...form.getInputProps('password')}
-        />
-        <PasswordInput label="Repeat the password" autoComplete="new-password" required key={form.key('confirm')} {...form.getInputProps('confirm')} />
+        <NewPasswordInputs form={form} label="Choose a password" repeatLabel="Repeat the password" />
         <Group justify="flex-end" mt={4}>
           <Button type="submit" loading={accept.isPending}>
             Create my account

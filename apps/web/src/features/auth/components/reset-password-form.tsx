@@ -1,4 +1,4 @@
-import { Anchor, Button, Group, PasswordInput, Stack } from '@mantine/core';
+import { Anchor, Button, Group, Stack } from '@mantine/core';
 import { schemaResolver, useForm } from '@mantine/form';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
@@ -7,6 +7,7 @@ import { paths } from '@/config/paths';
 import { useResetPassword } from '../api/reset-password';
 import { FormAlert } from './form-alert';
 import { matchingPasswords, newPasswordPairSchema } from './new-password-fields';
+import { NewPasswordInputs } from './new-password-inputs';
 
 const schema = matchingPasswords(newPasswordPairSchema);
 
@@ -35,16 +36,7 @@ export function ResetPasswordForm({ token, onSuccess }: { token: string; onSucce
         </FormAlert>
       )}
       <Stack gap="md">
-        <PasswordInput
-          label="New password"
-          description="At least 12 characters. A few unrelated words make a strong passphrase."
-          autoComplete="new-password"
-          required
-          data-autofocus
-          key={form.key('password')}
-          {...form.getInputProps('password')}
-        />
-        <PasswordInput label="Repeat the new password" autoComplete="new-password" required key={form.key('confirm')} {...form.getInputProps('confirm')} />
+        <NewPasswordInputs form={form} label="New password" repeatLabel="Repeat the new password" autoFocus />
         <Group justify="flex-end" mt={4}>
           <Button type="submit" loading={reset.isPending}>
             Save new password
