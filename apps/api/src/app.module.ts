@@ -15,6 +15,7 @@ import { HealthModule } from './modules/health/health.module.js';
 import { LibraryModule } from './modules/library/library.module.js';
 import { MailModule } from './modules/mail/mail.module.js';
 import { MeasurementsModule } from './modules/measurements/measurements.module.js';
+import { MethodDesignsModule } from './modules/method-designs/method-designs.module.js';
 import { MethodsModule } from './modules/methods/methods.module.js';
 import { RecordsModule } from './modules/records/records.module.js';
 import { SearchModule } from './modules/search/search.module.js';
@@ -80,6 +81,7 @@ export class AppModule {
         HealthModule,
         MethodsModule,
         MeasurementsModule,
+        MethodDesignsModule,
         LibraryModule,
         FilesModule,
         SearchModule,

@@ -43,14 +43,15 @@ export function evaluateMethodDesign(definition: DesignDefinition, values: Desig
   const problems: Record<string, string> = { ...designProblems(definition, sandbox) };
   const resolved = resolveValues(definition, values, options, sandbox, problems);
 
+  const formulaSet = {
+    inputs: resolved.formulaInputs,
+    expressions: [...definition.intermediates, ...definition.outputs].map(({ name, expression }) => ({ name, expression })),
+    checks: definition.checks.map(({ expression, message }) => ({ expression, message })),
+  };
   let formulas: FormulaSetResult | undefined;
   let code: EngineErrorCode = 'INVALID_INPUT';
   try {
-    formulas = evaluateFormulaSet({
-      inputs: resolved.formulaInputs,
-      expressions: [...definition.intermediates, ...definition.outputs].map(({ name, expression }) => ({ name, expression })),
-      checks: definition.checks.map(({ expression, message }) => ({ expression, message })),
-    });
+    formulas = evaluateFormulaSet(formulaSet);
   } catch (error) {
     if (!(error instanceof EngineError)) throw error;
     if (error.code === 'FORMULA_REFUSED' || error.code === 'LIMIT_EXCEEDED') code = error.code;
@@ -60,9 +61,41 @@ export function evaluateMethodDesign(definition: DesignDefinition, values: Desig
       if (path.startsWith('values.') && (resolved.failed.has(path.slice(7)) || !(path.slice(7) in resolved.formulaInputs))) continue;
       problems[path] ??= message;
     }
+    // Only checks failed: the formulas did evaluate, and a result in the wrong unit (the usual
+    // reason a check cannot compare) is reported at its own expression too.
+    if (Object.keys(error.fields).every((field) => field.startsWith('checks.'))) {
+      try {
+        const withoutChecks = evaluateFormulaSet({ ...formulaSet, checks: [] });
+        presentFormulas(definition, withoutChecks, sandbox, problems);
+      } catch {
+        // Already reported above.
+      }
+    }
   }
   if (formulas === undefined || Object.keys(problems).length > 0) throw designError(code, problems);
 
+  const { outputs, steps } = presentFormulas(definition, formulas, sandbox, problems);
+  if (Object.keys(problems).length > 0) throw designError('INVALID_INPUT', problems);
+
+  const verdict: Verdict | undefined =
+    formulas.checks.length === 0
+      ? undefined
+      : {
+          pass: formulas.checks.every((check) => check.pass),
+          summary: `${formulas.checks.filter((check) => check.pass).length} of ${formulas.checks.length} checks hold`,
+          checks: formulas.checks.map((check) => ({ label: check.message ?? check.expression, pass: check.pass, detail: check.detail })),
+        };
+  const warnings = [...resolved.warnings, ...formulas.warnings, ...(definition.safetyCritical ? [safetyCaution] : [])];
+  return { outputs, ...(verdict ? { verdict } : {}), warnings, steps, inputs: resolved.inputValues };
+}
+
+/** Intermediates and outputs in their declared units with a derivation step each; unit mismatches go to `problems`. */
+function presentFormulas(
+  definition: DesignDefinition,
+  formulas: FormulaSetResult,
+  sandbox: SandboxedMath,
+  problems: Record<string, string>,
+): { outputs: Record<string, DesignOutputValue>; steps: DerivationStep[] } {
   const outputs: Record<string, DesignOutputValue> = {};
   const steps: DerivationStep[] = [];
   const stepsByName = new Map(formulas.steps.map((step) => [step.label, step]));
@@ -82,18 +115,7 @@ export function evaluateMethodDesign(definition: DesignDefinition, values: Desig
     const converted = shown.quantity.unit !== computed.unit ? ` = ${quantityLatex(shown.quantity, sandbox.parse)}` : '';
     steps.push({ label: formula.label, latex: `${step.latex}${converted}`, value: shown.quantity.text });
   }
-  if (Object.keys(problems).length > 0) throw designError('INVALID_INPUT', problems);
-
-  const verdict: Verdict | undefined =
-    formulas.checks.length === 0
-      ? undefined
-      : {
-          pass: formulas.checks.every((check) => check.pass),
-          summary: `${formulas.checks.filter((check) => check.pass).length} of ${formulas.checks.length} checks hold`,
-          checks: formulas.checks.map((check) => ({ label: check.message ?? check.expression, pass: check.pass, detail: check.detail })),
-        };
-  const warnings = [...resolved.warnings, ...formulas.warnings, ...(definition.safetyCritical ? [safetyCaution] : [])];
-  return { outputs, ...(verdict ? { verdict } : {}), warnings, steps, inputs: resolved.inputValues };
+  return { outputs, steps };
 }
 
 function designError(code: EngineErrorCode, fields: Record<string, string>): EngineError {

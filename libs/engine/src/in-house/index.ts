@@ -6,3 +6,4 @@ export * from './expression-tex.js';
 export * from './quantity-unit.js';
 export * from './run-design-task.js';
 export * from './run-design-tests.js';
+export * from './design-field-paths.js';

@@ -16,7 +16,7 @@ import { ValidBody, ValidParams } from '../../common/validation/valid.decorators
 import { MethodsService } from './methods.service.js';
 
 const methodIdParamsSchema = z.strictObject({
-  id: z.string().regex(/^[a-z0-9][a-z0-9-]{0,99}$/, 'Method ids are lower-case letters, digits and hyphens'),
+  id: z.string().regex(/^(house:)?[a-z0-9][a-z0-9-]{0,99}$/, 'Method ids are lower-case letters, digits and hyphens (in-house ones start with house:)'),
 });
 
 @Controller()
@@ -26,8 +26,8 @@ export class MethodsController {
 
   @Get('methods')
   @ApiContract({ summary: 'Catalog of methods with their versions, input JSON schemas and outputs', response: methodCatalogSchema, tag: 'Methods' })
-  list() {
-    return { items: this.methods.listMethods() };
+  async list() {
+    return { items: await this.methods.listMethods() };
   }
 
   @Get('methods/:id')
@@ -45,7 +45,7 @@ export class MethodsController {
   })
   evaluate(
     @ValidParams(methodIdParamsSchema) params: { id: string },
-    @ValidBody(evaluateRequestSchema) body: { inputs: Record<string, unknown>; unit: LengthUnit; acceptance?: AcceptanceRule },
+    @ValidBody(evaluateRequestSchema) body: { inputs: Record<string, unknown>; unit: LengthUnit; acceptance?: AcceptanceRule; methodVersion?: number | null },
   ) {
     return this.methods.evaluate({ method: params.id, ...body });
   }
@@ -58,7 +58,8 @@ export class MethodsController {
     tag: 'Methods',
   })
   evaluateBatch(
-    @ValidBody(batchEvaluateRequestSchema) body: { items: { method: string; inputs: Record<string, unknown>; unit: LengthUnit; acceptance?: AcceptanceRule }[] },
+    @ValidBody(batchEvaluateRequestSchema)
+    body: { items: { method: string; inputs: Record<string, unknown>; unit: LengthUnit; acceptance?: AcceptanceRule; methodVersion?: number | null }[] },
   ) {
     return this.methods.evaluateBatch(body.items);
   }

@@ -14,6 +14,10 @@ export class MethodEvaluationException extends AppException {
     return new MethodEvaluationException(404, 'NOT_FOUND', `No method with id "${id}".`, { method: 'Unknown method' });
   }
 
+  static unknownVersion(id: string, version: number): MethodEvaluationException {
+    return new MethodEvaluationException(404, 'NOT_FOUND', `Method "${id}" has no released version ${version}.`, { methodVersion: `No released version ${version}` });
+  }
+
   static fromEngine(code: EngineErrorCode, message: string, fields: Record<string, string>): MethodEvaluationException {
     if (code === 'UNKNOWN_METHOD') return new MethodEvaluationException(404, 'NOT_FOUND', message, { method: 'Unknown method' });
     const hasFields = Object.keys(fields).length > 0;
