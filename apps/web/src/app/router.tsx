@@ -69,6 +69,26 @@ export const routes: RouteObject[] = [
         ErrorBoundary: RouteError,
       },
       {
+        path: paths.standards.history.path,
+        lazy: () => import('./routes/app/standards/history').then((m) => ({ Component: m.StandardHistoryRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.standards.compare.path,
+        lazy: () => import('./routes/app/standards/compare').then((m) => ({ Component: m.StandardCompareRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.records.list.path,
+        lazy: () => import('./routes/app/records/list').then((m) => ({ Component: m.RecordsRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
+        path: paths.records.record.path,
+        lazy: () => import('./routes/app/records/record').then((m) => ({ Component: m.RecordRoute })),
+        ErrorBoundary: RouteError,
+      },
+      {
         path: paths.methods.catalog.path,
         lazy: () => import('./routes/app/methods/catalog').then((m) => ({ Component: m.MethodsCatalogRoute })),
         ErrorBoundary: RouteError,

@@ -39,6 +39,15 @@ export const paths = {
     page: { path: '/standards/:documentNumber', getHref: (documentNumber: string) => `/standards/${encodeURIComponent(documentNumber)}` },
     create: { path: '/standards/new', getHref: () => '/standards/new' },
     edit: { path: '/standards/:documentNumber/edit', getHref: (documentNumber: string) => `/standards/${encodeURIComponent(documentNumber)}/edit` },
+    history: { path: '/standards/:documentNumber/history', getHref: (documentNumber: string) => `/standards/${encodeURIComponent(documentNumber)}/history` },
+    compare: {
+      path: '/standards/:documentNumber/compare',
+      getHref: (documentNumber: string, from?: string, to?: string) => withQuery(`/standards/${encodeURIComponent(documentNumber)}/compare`, { from, to }),
+    },
+  },
+  records: {
+    list: { path: '/records', getHref: () => '/records' },
+    record: { path: '/records/:recordId', getHref: (recordId: string) => `/records/${encodeURIComponent(recordId)}` },
   },
   methods: {
     catalog: { path: '/methods', getHref: () => '/methods' },

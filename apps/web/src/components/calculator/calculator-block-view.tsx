@@ -2,7 +2,7 @@ import { Alert, Badge, Button, Collapse, Group, Loader, Paper, Text } from '@man
 import type { LengthUnit, MethodSummary } from '@limitbook/contracts';
 import type { CalculatorBlockAttrs } from '@limitbook/editor-schema';
 import { IconAlertTriangle, IconChevronDown, IconCircleCheck, IconRestore, IconRuler2 } from '@tabler/icons-react';
-import { useMemo, useState } from 'react';
+import { useMemo, useState, type ReactNode } from 'react';
 import { type EvaluationRequest } from './api/evaluate';
 import { DerivationSteps } from './derivation-steps';
 import { acceptanceInWords, ruleForRequest } from './lib/acceptance-words';
@@ -47,6 +47,8 @@ export type CalculatorBlockViewProps = {
   catalogLoaded?: boolean;
   /** False holds evaluation back, e.g. until the page's batch has answered. */
   evaluationEnabled?: boolean;
+  /** Actions beside the result (e.g. saving it as a record), given what the reader has entered. */
+  resultActions?: (current: { inputs: Record<string, unknown>; unit: LengthUnit; evaluated: boolean }) => ReactNode;
 };
 
 /**
@@ -54,7 +56,7 @@ export type CalculatorBlockViewProps = {
  * server as they change, with the verdict against the standard's acceptance rule, the
  * outputs, warnings, cautions, the derivation and a chart where the method gives one.
  */
-export function CalculatorBlockView({ block, method, catalogLoaded = true, evaluationEnabled = true }: CalculatorBlockViewProps) {
+export function CalculatorBlockView({ block, method, catalogLoaded = true, evaluationEnabled = true, resultActions }: CalculatorBlockViewProps) {
   const defaults = block.defaults as Record<string, unknown>;
   const [inputs, setInputs] = useState<Record<string, unknown>>(defaults);
   const [unit, setUnit] = useState<LengthUnit>(block.unit);
@@ -149,11 +151,14 @@ export function CalculatorBlockView({ block, method, catalogLoaded = true, evalu
           <div className={classes.results} data-stale={view.stale || undefined}>
             <Group justify="space-between" mb="xs">
               <Text className={classes.sectionTitle}>Result</Text>
-              {view.stale && view.result && (
-                <Badge color={state === 'error' ? 'redline' : 'gray'} variant="light" radius="xs" data-testid="stale-label">
-                  {state === 'error' ? 'Out of date: last result for earlier inputs' : 'Updating…'}
-                </Badge>
-              )}
+              <Group gap="xs">
+                {view.stale && view.result && (
+                  <Badge color={state === 'error' ? 'redline' : 'gray'} variant="light" radius="xs" data-testid="stale-label">
+                    {state === 'error' ? 'Out of date: last result for earlier inputs' : 'Updating…'}
+                  </Badge>
+                )}
+                {resultActions?.({ inputs, unit, evaluated: state === 'current' && !!view.result })}
+              </Group>
             </Group>
             {state === 'error' && view.error && (
               <Alert color="redline" variant="light" icon={<IconAlertTriangle size={18} />} mb="sm" title="The server could not evaluate these inputs" role="alert">

@@ -1,7 +1,7 @@
 import { AppShell, Avatar, Badge, Burger, Group, Menu, NavLink, Stack, Text, UnstyledButton } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { roleLabels, type SessionUser } from '@limitbook/contracts';
-import { IconBooks, IconChevronDown, IconMathFunction, IconLogout, IconMail, IconListDetails, IconUsers, type Icon } from '@tabler/icons-react';
+import { IconBooks, IconChevronDown, IconFileCertificate, IconMathFunction, IconLogout, IconMail, IconListDetails, IconUsers, type Icon } from '@tabler/icons-react';
 import { useEffect, type ReactNode } from 'react';
 import { Link, useLocation } from 'react-router-dom';
 import { Logo } from '@/components/brand/logo';
@@ -17,6 +17,7 @@ const sections: NavSection[] = [
     label: 'Knowledge',
     items: [
       { label: 'Library', href: paths.library.home.getHref(), area: 'library', icon: IconBooks },
+      { label: 'My records', href: paths.records.list.getHref(), area: 'library', icon: IconFileCertificate },
       { label: 'Methods', href: paths.methods.catalog.getHref(), area: 'library', icon: IconMathFunction },
     ],
   },

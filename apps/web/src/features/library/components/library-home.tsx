@@ -1,9 +1,12 @@
 import { Anchor, Badge, Button, Group, Paper, SimpleGrid, Skeleton, Stack, Text, Title } from '@mantine/core';
 import type { Collection } from '@limitbook/contracts';
-import { IconArrowRight, IconX } from '@tabler/icons-react';
+import { IconArrowRight, IconPlus, IconX } from '@tabler/icons-react';
+import type { ReactNode } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { PanelError } from '@/components/errors/panel-error';
 import { paths } from '@/config/paths';
+import { canAccess } from '@/lib/authorization';
+import { useSessionUser } from '@/lib/session';
 import { useCollections } from '../api/get-collections';
 import { usePages } from '../api/get-pages';
 import { useTags } from '../api/get-tags';
@@ -101,8 +104,9 @@ function TagCloud({ active }: { active: string | null }) {
   );
 }
 
-/** The library's front page: search, the collections, what changed lately, and tags to browse by. */
-export function LibraryHome({ firstName }: { firstName: string }) {
+/** The library's front page: search, the collections, what changed lately, the pages you watch, and tags to browse by. */
+export function LibraryHome({ firstName, watched }: { firstName: string; watched?: ReactNode }) {
+  const author = canAccess(useSessionUser().role, 'standards.edit');
   const navigate = useNavigate();
   const [params] = useSearchParams();
   const tag = params.get('tag');
@@ -111,7 +115,14 @@ export function LibraryHome({ firstName }: { firstName: string }) {
   return (
     <Stack gap="xl">
       <section className={classes.hero} aria-labelledby="library-title">
-        <Text className={classes.eyebrow}>Library</Text>
+        <Group justify="space-between" align="center">
+          <Text className={classes.eyebrow}>Library</Text>
+          {author && (
+            <Button component={Link} to={paths.standards.create.getHref()} size="xs" leftSection={<IconPlus size={16} />}>
+              New standard
+            </Button>
+          )}
+        </Group>
         <Title order={1} id="library-title" className={classes.title}>
           {greeting(new Date().getHours())}, {firstName}
         </Title>
@@ -125,6 +136,15 @@ export function LibraryHome({ firstName }: { firstName: string }) {
         </Title>
         <Collections />
       </section>
+
+      {watched && !tag && (
+        <section aria-labelledby="watched-title" className={classes.block}>
+          <Title order={2} id="watched-title" className={classes.blockTitle}>
+            My watched pages
+          </Title>
+          {watched}
+        </section>
+      )}
 
       <section aria-labelledby="pages-title" className={classes.block}>
         <Group justify="space-between" align="baseline">

@@ -1,6 +1,8 @@
-import { Anchor, Badge, Breadcrumbs, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { Alert, Anchor, Badge, Breadcrumbs, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
+import type { LengthUnit, Page } from '@limitbook/contracts';
+import { IconArchive } from '@tabler/icons-react';
 import { calculatorBlockAttrsSchema } from '@limitbook/editor-schema';
-import { useMemo } from 'react';
+import { useMemo, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { CalculatorBlockView, useMethods, type CalculatorBlockConfig } from '@/components/calculator';
 import { DocumentRenderer } from '@/components/document/document-renderer';
@@ -13,6 +15,7 @@ import { formatDate, formatDateTime } from '@/lib/format';
 import { useSessionUser } from '@/lib/session';
 import { usePage, type PageView } from '../api/get-page';
 import { usePageEvaluations } from '../api/use-page-evaluations';
+import { PageActions } from './page-actions';
 import { ReviewPanel, ReviewWaitingBanner } from './review-panel';
 import { TableOfContents } from './table-of-contents';
 import classes from './standard-view.module.css';
@@ -44,8 +47,28 @@ function NotFound({ documentNumber }: { documentNumber: string }) {
   );
 }
 
+/** What a calculator block's extra actions get: the block, the revision it sits in, and the reader's entries. */
+export type CalculatorActionContext = {
+  page: Page;
+  block: CalculatorBlockConfig;
+  inputs: Record<string, unknown>;
+  unit: LengthUnit;
+  evaluated: boolean;
+};
+
+export type StandardViewProps = {
+  documentNumber: string;
+  view?: PageView;
+  /** More header actions (e.g. watching), composed by the route. */
+  headerActions?: (page: Page) => ReactNode;
+  /** Shown under the header of a release (e.g. its impact check), composed by the route. */
+  releaseNotes?: (page: Page) => ReactNode;
+  /** Actions beside each calculator block's result (e.g. saving a record), composed by the route. */
+  calculatorActions?: (context: CalculatorActionContext) => ReactNode;
+};
+
 /** A standard as readers see it: the released text with every calculator block live. */
-export function StandardView({ documentNumber, view = 'released' }: { documentNumber: string; view?: PageView }) {
+export function StandardView({ documentNumber, view = 'released', headerActions, releaseNotes, calculatorActions }: StandardViewProps) {
   const page = usePage(documentNumber, view);
   const reviewer = canAccess(useSessionUser().role, 'standards.review');
   const methods = useMethods();
@@ -72,8 +95,8 @@ export function StandardView({ documentNumber, view = 'released' }: { documentNu
   const { revision } = page.data;
   // Read as plain strings: document control adds states and letters to what a revision carries.
   const state: string = revision.state;
-  const letter = (revision as { revisionLetter?: string | null }).revisionLetter ?? null;
-  const obsolete = (page.data as { obsolete?: { reason: string; at: string } | null }).obsolete ?? null;
+  const letter = revision.revisionLetter;
+  const obsolete = page.data.obsolete;
   const released = state === 'published' || state === 'released';
   const inReview = state === 'in_review';
   const reviewWaiting = reviewer && !inReview && page.data.draft?.state === 'in_review';
@@ -92,16 +115,35 @@ export function StandardView({ documentNumber, view = 'released' }: { documentNu
           <Text size="sm">{page.data.documentNumber}</Text>
         </Breadcrumbs>
 
+        {obsolete && (
+          <Alert color="redline" variant="light" title="Obsolete: kept for reference only" icon={<IconArchive size={18} />} mb="md" role="note" data-testid="obsolete-banner">
+            <Text size="sm">
+              Marked obsolete on {formatDate(obsolete.at)}
+              {obsolete.by ? ` by ${obsolete.by.name}` : ''}: {obsolete.reason}
+            </Text>
+            <Text size="sm" mt={4}>
+              Do not apply this standard to new designs. Its text and calculators stay readable for existing work.
+            </Text>
+          </Alert>
+        )}
         {reviewWaiting && <ReviewWaitingBanner documentNumber={page.data.documentNumber} />}
         {reviewer && inReview && <ReviewPanel page={page.data} />}
 
         <header className={classes.header}>
-          <Group gap="sm" align="center" wrap="wrap">
-            <Text className={classes.number}>{page.data.documentNumber}</Text>
-            {letter && <Text className={classes.letter}>Rev. {letter}</Text>}
-            <Badge color={released ? 'verdigris' : state === 'superseded' ? 'gray' : 'amber'} variant={released ? 'light' : 'filled'} radius="xs" className={classes.state}>
-              {stateLabels[state] ?? state}
-            </Badge>
+          <Group justify="space-between" align="center" gap="sm" wrap="wrap">
+            <Group gap="sm" align="center" wrap="wrap">
+              <Text className={classes.number}>{page.data.documentNumber}</Text>
+              {letter && <Text className={classes.letter}>Rev. {letter}</Text>}
+              <Badge color={released ? 'verdigris' : state === 'superseded' ? 'gray' : 'amber'} variant={released ? 'light' : 'filled'} radius="xs" className={classes.state}>
+                {stateLabels[state] ?? state}
+              </Badge>
+              {obsolete && (
+                <Badge color="redline" variant="filled" radius="xs" className={classes.state}>
+                  Obsolete
+                </Badge>
+              )}
+            </Group>
+            <PageActions page={page.data} extra={headerActions?.(page.data)} />
           </Group>
           <Title order={1} id="standard-title" className={classes.title}>
             {revision.title}
@@ -120,12 +162,15 @@ export function StandardView({ documentNumber, view = 'released' }: { documentNu
               <dd>{page.data.owner?.name ?? '—'}</dd>
             </div>
             <div>
-              <dt>{released ? 'Released' : 'Last saved'}</dt>
-              <dd title={formatDateTime(revision.publishedAt ?? revision.updatedAt)}>
-                {formatDate(revision.publishedAt ?? revision.updatedAt)}
-                {revision.publishedBy ? ` by ${revision.publishedBy.name}` : ''}
-              </dd>
+              <dt>{revision.publishedAt ? 'Released' : 'Last saved'}</dt>
+              <dd title={formatDateTime(revision.publishedAt ?? revision.updatedAt)}>{formatDate(revision.publishedAt ?? revision.updatedAt)}</dd>
             </div>
+            {revision.publishedBy && (
+              <div>
+                <dt>Approved by</dt>
+                <dd>{revision.publishedBy.name}</dd>
+              </div>
+            )}
           </dl>
           {page.data.tags.length > 0 && (
             <Group gap={6} wrap="wrap" mt="sm">
@@ -141,12 +186,9 @@ export function StandardView({ documentNumber, view = 'released' }: { documentNu
               This revision is not released: it is not yet a rule.
             </Text>
           )}
-          {obsolete && (
-            <Text size="sm" c="redline.8" fw={600} mt="sm" role="note">
-              Obsolete since {formatDate(obsolete.at)}: {obsolete.reason}
-            </Text>
-          )}
         </header>
+
+        {released && releaseNotes?.(page.data)}
 
         {methods.isError && <PanelError error={methods.error} onRetry={() => void methods.refetch()} title="The calculators could not load their methods" />}
 
@@ -159,7 +201,15 @@ export function StandardView({ documentNumber, view = 'released' }: { documentNu
               if (!block) {
                 return <PanelError error={new Error('This calculator block is malformed and cannot run.')} title="Calculator unavailable" />;
               }
-              return <CalculatorBlockView block={block} method={methods.byId(block.method)} catalogLoaded={methods.isSuccess} evaluationEnabled={evaluations.settled} />;
+              return (
+                <CalculatorBlockView
+                  block={block}
+                  method={methods.byId(block.method)}
+                  catalogLoaded={methods.isSuccess}
+                  evaluationEnabled={evaluations.settled}
+                  resultActions={released && calculatorActions ? (current) => calculatorActions({ page: page.data, block, ...current }) : undefined}
+                />
+              );
             }}
           />
         </div>
