@@ -19,6 +19,7 @@ import {
   type ValueMapField,
 } from './lib/json-schema';
 import classes from './method-inputs-form.module.css';
+import { canImportTable, TableCsvImport } from './table-csv-import';
 
 export type MethodInputsFormProps = {
   /** The method's `inputSchema` from the catalog. */
@@ -43,6 +44,7 @@ export type MethodInputsFormProps = {
 
 type Context = {
   unit: LengthUnit;
+  method?: string;
   value: Record<string, unknown>;
   set: (path: string, next: unknown) => void;
   isLocked: (path: string) => boolean;
@@ -228,7 +230,11 @@ function RowActions({ label, onRemove, disabled }: { label: string; onRemove: ()
 function TableInputField({ field, context }: { field: TableField; context: Context }) {
   const rows = (getAtPath(context.value, field.path) as Record<string, unknown>[] | undefined) ?? [];
   const tableLocked = context.isLocked(field.path);
-  const rowLabel = (row: Record<string, unknown>, index: number) => (typeof row.name === 'string' && row.name ? row.name : `row ${index + 1}`);
+  const rowLabel = (row: Record<string, unknown>, index: number) =>
+    typeof row.name === 'string' && row.name ? row.name : typeof row.label === 'string' && row.label ? row.label : `row ${index + 1}`;
+  // A new row gets a name in the column the table names its rows by.
+  const namedBy = field.columns.find((column) => column.name === 'name' || column.name === 'label')?.name;
+  const noun = field.name === 'contributors' ? 'contributor' : field.name === 'features' ? 'feature' : 'row';
   const error = context.errorAt(field.path);
 
   return (
@@ -276,10 +282,19 @@ function TableInputField({ field, context }: { field: TableField; context: Conte
           size="compact-sm"
           mt={6}
           leftSection={<IconPlus size={14} />}
-          onClick={() => context.set(field.path, [...rows, { ...field.newRow, name: `Contributor ${rows.length + 1}` }])}
+          onClick={() => context.set(field.path, [...rows, { ...field.newRow, ...(namedBy ? { [namedBy]: `${noun === 'row' ? 'Row' : noun.charAt(0).toUpperCase() + noun.slice(1)} ${rows.length + 1}` } : {}) }])}
         >
-          Add {field.name === 'contributors' ? 'contributor' : 'row'}
+          Add {noun}
         </Button>
+      )}
+      {!tableLocked && context.method && canImportTable(context.method, field.name) && (
+        <TableCsvImport
+          method={context.method}
+          input={field.name}
+          label={field.label}
+          unit={context.unit}
+          onRows={(imported, mode) => context.set(field.path, mode === 'append' ? [...rows, ...imported] : imported)}
+        />
       )}
     </Input.Wrapper>
   );
@@ -524,6 +539,7 @@ export function MethodInputsForm({ schema, method, value, onChange, unit, locked
 
   const context: Context = {
     unit,
+    method,
     value,
     set: (path, next) => onChange(setAtPath(value, path, next)),
     // A locked object or table locks everything inside it.

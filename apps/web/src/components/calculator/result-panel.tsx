@@ -68,6 +68,13 @@ function Headline({ result, method, acceptance }: { result: EvaluationResult; me
   );
 }
 
+function cellText(value: unknown): string {
+  if (typeof value === 'number') return formatNumber(value);
+  if (typeof value === 'boolean') return value ? 'Yes' : 'No';
+  if (value === null || value === undefined) return '—';
+  return typeof value === 'string' ? value : JSON.stringify(value);
+}
+
 function SimpleTable({ rows, unit, caption }: { rows: Record<string, unknown>[]; unit: string; caption: string }) {
   const keys = Object.keys(rows[0] ?? {});
   return (
@@ -91,8 +98,8 @@ function SimpleTable({ rows, unit, caption }: { rows: Record<string, unknown>[];
           {rows.map((row, index) => (
             <Table.Tr key={index}>
               {keys.map((key) => (
-                <Table.Td key={key} className={typeof row[key] === 'number' ? classes.numeric : undefined}>
-                  {typeof row[key] === 'number' ? formatNumber(row[key] as number) : String(row[key] ?? '—')}
+                <Table.Td key={key} className={typeof row[key] === 'number' ? classes.numeric : undefined} data-fails={row[key] === false || undefined}>
+                  {cellText(row[key])}
                 </Table.Td>
               ))}
             </Table.Tr>
@@ -171,7 +178,9 @@ export function ResultPanel({ result, method, acceptance, stale = false, hideCau
     ...Object.keys(result.outputs).filter((name) => !describedOutputs.some((output) => output.name === name)),
   ].filter((name) => !separatelyShown.has(name));
   const fit = isFitSide(result.outputs.hole) || isFitSide(result.outputs.shaft);
-  const listed = fit ? names.filter((name) => name !== 'hole' && name !== 'shaft') : names;
+  // Other table outputs (a row per measured feature…) get a table of their own below the scalar results.
+  const tableOutputs = describedOutputs.filter((output) => output.kind === 'table' && !separatelyShown.has(output.name) && Array.isArray(result.outputs[output.name]));
+  const listed = (fit ? names.filter((name) => name !== 'hole' && name !== 'shaft') : names).filter((name) => !tableOutputs.some((output) => output.name === name));
   const bonusTable = Array.isArray(result.outputs.bonusTable) ? (result.outputs.bonusTable as Record<string, unknown>[]) : null;
   const contributions = Array.isArray(result.outputs.contributions) ? (result.outputs.contributions as Record<string, unknown>[]) : null;
   const hasChart = !!result.outputs.sweep || !!(result.outputs.monteCarlo as { histogram?: unknown } | undefined)?.histogram;
@@ -234,6 +243,15 @@ export function ResultPanel({ result, method, acceptance, stale = false, hideCau
           </Table.Tbody>
         </Table>
       </Table.ScrollContainer>
+
+      {tableOutputs.map((output) => {
+        const rows = result.outputs[output.name] as Record<string, unknown>[];
+        return rows.length > 0 ? (
+          <Section key={output.name} title={output.label}>
+            <SimpleTable rows={rows} unit={result.unit} caption={output.description} />
+          </Section>
+        ) : null;
+      })}
 
       {contributions && contributions.length > 0 && (
         <Section title="Contribution to the variance">

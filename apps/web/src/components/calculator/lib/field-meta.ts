@@ -49,12 +49,20 @@ const labelsByName: Record<string, string> = {
   expressions: 'Expressions',
   values: 'Values',
   checks: 'Checks',
+  features: 'Measured features',
+  label: 'Label',
+  basicX: 'Basic X',
+  basicY: 'Basic Y',
+  measuredX: 'Measured X',
+  measuredY: 'Measured Y',
+  actualSize: 'Actual size',
 };
 
 // In the fastener methods T1 is the clearance holes' tolerance.
 const labelsInContext: Record<string, string> = {
   'fastener-fixed:positionTolerance': 'Hole position tolerance (T1)',
   'fastener-floating:positionTolerance': 'Position tolerance (T)',
+  'position-check:datum': 'Datum feature of size (optional)',
 };
 
 const lengthNames = new Set([
@@ -78,6 +86,11 @@ const lengthNames = new Set([
   'sigma',
   'lowerSpec',
   'upperSpec',
+  'basicX',
+  'basicY',
+  'measuredX',
+  'measuredY',
+  'actualSize',
 ]);
 
 export function humanize(name: string): string {
@@ -153,6 +166,14 @@ const outputKeyLabels: Record<string, string> = {
   upTo: 'Up to',
   percent: 'Share',
   name: 'Contributor',
+  label: 'Feature',
+  dx: 'Δx',
+  dy: 'Δy',
+  deviation: 'Position ⌀',
+  allowed: 'Allowed ⌀',
+  sizeConforms: 'Size in limits',
+  conformsAsMeasured: 'Conforms as measured',
+  deviationWithShift: 'Position ⌀ after group shift',
 };
 
 const lengthOutputKeys = new Set([
@@ -176,6 +197,11 @@ const lengthOutputKeys = new Set([
   'standardTolerance',
   'over',
   'upTo',
+  'dx',
+  'dy',
+  'deviation',
+  'allowed',
+  'deviationWithShift',
 ]);
 
 export function outputKeyLabel(key: string): string {
