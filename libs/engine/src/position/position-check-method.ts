@@ -202,7 +202,7 @@ export const positionCheckMethod = defineMethod({
       pass: patternConforms,
       summary: patternConforms
         ? shiftNeeded
-          ? `Pattern conforms with datum feature shift: ${features.length - conformingCount} of ${features.length} features need the group shift.`
+          ? `Pattern conforms with datum feature shift: ${features.length - conformingCount} of ${features.length} features are outside their zone as measured and within it after the group shift.`
           : `Pattern conforms as measured: all ${features.length} features within size and position.`
         : `Pattern does not conform: ${failingSize.length + failingPosition.length} of ${features.length} features outside ${failingSize.length > 0 ? 'size or ' : ''}position${datumShift > 0 ? ' even with the datum feature shift' : ''}.`,
       checks: [

@@ -1,4 +1,6 @@
 import { type CalculationRecord, type Collection, type ErrorBody, type EvaluationResult, type Page, type TableImportResult } from '@limitbook/contracts';
+import { readFile } from 'node:fs/promises';
+import { fileURLToPath } from 'node:url';
 import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { releasePage } from '../library/testing/release-page.js';
@@ -44,6 +46,16 @@ describe('CSV import of table inputs over HTTP', () => {
     expect(body.rows).toHaveLength(4);
     expect(body.rows[0]).toEqual({ label: 'H1', basicX: 50, basicY: 0, measuredX: 50.03, measuredY: 0.04, actualSize: 10.05 });
     expect(await t.rowCounts()).toEqual(before);
+  });
+
+  it('reads the demo CMM report of BW-INS-202, which then conforms as measured', async () => {
+    const demoCsv = await readFile(fileURLToPath(new URL('../../../../../content/demo/inspection-data/bw-ins-202-bv40-end-cover-sn0419.csv', import.meta.url)));
+    const body = (await importCsv(demoCsv, undefined, '', 'bw-ins-202-bv40-end-cover-sn0419.csv').expect(200)).body as TableImportResult;
+    expect(body.problems).toEqual([]);
+    expect(body.rows.map((row) => row.label)).toEqual(['H1', 'H2', 'H3', 'H4', 'H5', 'H6', 'H7', 'H8']);
+    const inputs = { featureType: 'internal', lowerLimit: 10.5, upperLimit: 10.68, positionTolerance: 0.25, toleranceModifier: 'MMC', features: body.rows };
+    const result = (await t.http.post('/api/methods/position-check/evaluate').set(as(reader)).send({ inputs, unit: 'mm' }).expect(200)).body as EvaluationResult;
+    expect(result.outputs).toMatchObject({ conformsAsMeasured: true, patternConforms: true });
   });
 
   it('converts lengths from a unit column and from header suffixes to the unit asked for', async () => {
