@@ -11,7 +11,8 @@ import {
   methodPreviewResponseSchema,
   methodRevisionSchema,
   methodVersionListSchema,
-  methodVersionParamsSchema,
+  methodVersionQuerySchema,
+  restoreMethodVersionRequestSchema,
   saveMethodDraftRequestSchema,
   sendBackRequestSchema,
   submitForReviewRequestSchema,
@@ -21,7 +22,8 @@ import {
   type DesignDefinition,
   type MethodCompareQuery,
   type MethodDesignParams,
-  type MethodVersionParams,
+  type MethodVersionQuery,
+  type RestoreMethodVersionRequest,
   type SendBackRequest,
   type SubmitForReviewRequest,
 } from '@limitbook/contracts';
@@ -166,19 +168,19 @@ export class MethodDesignsController {
     return this.designs.versions(user, params.slug);
   }
 
-  @Get(':slug/versions/:version')
+  @Get(':slug/released')
   @Roles(...AnySignedIn)
-  @ApiContract({ summary: 'One released or superseded version', response: methodRevisionSchema, tag })
-  version(@ValidParams(methodVersionParamsSchema) params: MethodVersionParams) {
-    return this.designs.version(params.slug, params.version);
+  @ApiContract({ summary: 'One released or superseded version, by number', response: methodRevisionSchema, tag })
+  version(@ValidParams(methodDesignParamsSchema) params: MethodDesignParams, @ValidQuery(methodVersionQuerySchema) query: MethodVersionQuery) {
+    return this.designs.version(params.slug, query.version);
   }
 
-  @Post(':slug/versions/:version/restore')
+  @Post(':slug/restore')
   @HttpCode(200)
   @Roles('admin')
   @ApiContract({ summary: "Start a new draft from an earlier version's definition (409 while a version is open)", response: methodRevisionSchema, tag })
-  restore(@CurrentUser() actor: AuthUser, @ValidParams(methodVersionParamsSchema) params: MethodVersionParams) {
-    return this.designs.restore(actor, params.slug, params.version);
+  restore(@CurrentUser() actor: AuthUser, @ValidParams(methodDesignParamsSchema) params: MethodDesignParams, @ValidBody(restoreMethodVersionRequestSchema) body: RestoreMethodVersionRequest) {
+    return this.designs.restore(actor, params.slug, body.version);
   }
 
   @Get(':slug/compare')

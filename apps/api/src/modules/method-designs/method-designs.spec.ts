@@ -210,7 +210,7 @@ describe('in-house method designs', () => {
     await as('author').post('/api/method-designs/cord-squeeze/draft/submit', { reviewerIds: [reviewerId] }).expect(409);
     await as('reviewer').post('/api/method-designs/cord-squeeze/draft/approve', { baseVersion: 1 }).expect(409);
     await as('author').post('/api/method-designs/cord-squeeze/draft/run-tests').expect(404);
-    expect((await as('reader').get('/api/method-designs/cord-squeeze/versions/1').expect(200)).body.definition.tests[0].expected.squeeze.value).toBe(20.68);
+    expect((await as('reader').get('/api/method-designs/cord-squeeze/released?version=1').expect(200)).body.definition.tests[0].expected.squeeze.value).toBe(20.68);
     expect((await as('reader').get('/api/method-designs/cord-squeeze').expect(200)).body).toMatchObject({ latestVersion: 1, draft: null });
   });
 
@@ -260,11 +260,11 @@ describe('in-house method designs', () => {
   });
 
   it('lets an admin restore an earlier version as a new draft', async () => {
-    await as('author').post('/api/method-designs/cord-squeeze/versions/1/restore').expect(403);
-    const restored = await as('admin').post('/api/method-designs/cord-squeeze/versions/1/restore').expect(200);
+    await as('author').post('/api/method-designs/cord-squeeze/restore', { version: 1 }).expect(403);
+    const restored = await as('admin').post('/api/method-designs/cord-squeeze/restore', { version: 1 }).expect(200);
     expect(restored.body).toMatchObject({ state: 'draft', methodVersion: null, restoredFromVersion: 1, problems: {} });
     expect(restored.body.definition.outputs[0].expression).toBe('100 * (cord - depth) / cord');
-    await as('admin').post('/api/method-designs/cord-squeeze/versions/1/restore').expect(409);
+    await as('admin').post('/api/method-designs/cord-squeeze/restore', { version: 1 }).expect(409);
     const compare = await as('author').get('/api/method-designs/cord-squeeze/compare?from=2&to=draft').expect(200);
     expect(compare.body.to).toMatchObject({ state: 'draft', methodVersion: null });
     await as('author').delete('/api/method-designs/cord-squeeze/draft').expect(204);
@@ -319,5 +319,17 @@ describe('in-house method designs', () => {
     expect(record.body).toMatchObject({ method: 'house:press-fit-pressure', methodVersion: 1 });
     // Smallest H7/p6 interference at Ø16 is 0.018 mm (ISO 286-2, reference fit table): p scales with δ, 120.41 × 18/29 = 74.74 MPa.
     expect(record.body.outputs.pressure.text).toBe('74.74 MPa');
+
+    // BW-STD-160 pins version 1 although version 2 is out (released in the test above): the record says 1.
+    const sealPage = await as('reader').get('/api/pages/BW-STD-160').expect(200);
+    const sealBlock = listCalculatorBlocks(sealPage.body.revision.document as LimitbookDocument)[0]!;
+    const sealRecord = await as('reader')
+      .post('/api/records', { pageId: sealPage.body.id, revisionId: sealPage.body.revision.id, blockId: sealBlock.blockId, inputs: sealBlock.defaults })
+      .expect(201);
+    expect(sealRecord.body).toMatchObject({ method: 'house:o-ring-squeeze', methodVersion: 1, verdict: { pass: true } });
+    const refused = await as('reader')
+      .post('/api/records', { pageId: sealPage.body.id, revisionId: sealPage.body.revision.id, blockId: sealBlock.blockId, inputs: { ...sealBlock.defaults, depthMax: 99 } })
+      .expect(400);
+    expect(refused.body.fields).toHaveProperty(['inputs.depthMax']);
   });
 });

@@ -183,11 +183,11 @@ export class RecordsService {
   /** Method errors on a reader's inputs come back keyed under `inputs.` like the request's own fields. */
   private async evaluateForRequest(block: CalculatorBlockAttrs, inputs: Record<string, unknown>, unit: CalculatorBlockAttrs['unit']): Promise<EvaluationResult> {
     try {
-      return await this.methods.evaluate({ method: block.method, inputs, unit, acceptance: block.acceptance ?? undefined });
+      return await this.methods.evaluate({ method: block.method, methodVersion: block.methodVersion, inputs, unit, acceptance: block.acceptance ?? undefined });
     } catch (error) {
       if (error instanceof AppException && error.getStatus() === 400 && error.fields) {
         const fields = Object.fromEntries(
-          Object.entries(error.fields).map(([key, message]) => [key === 'inputs' || key === 'method' || key.startsWith('acceptance.') ? key : `inputs.${key}`, message]),
+          Object.entries(error.fields).map(([key, message]) => [key === 'inputs' || key.startsWith('inputs.') || key === 'method' || key === 'methodVersion' || key.startsWith('acceptance.') ? key : `inputs.${key}`, message]),
         );
         throw new AppException(400, 'VALIDATION_FAILED', error.message, fields);
       }
@@ -300,6 +300,7 @@ export class RecordsService {
     try {
       const result = await this.methods.evaluate({
         method: newBlock.method,
+        methodVersion: newBlock.methodVersion,
         inputs: withLockedDefaults(record.inputs, newBlock),
         unit: record.unit,
         acceptance: newBlock.acceptance ?? undefined,
