@@ -66,9 +66,9 @@ export const positionCheckMethod = defineMethod({
       description:
         'Per feature: dx, dy, deviation as a diameter, actual size, size within limits, bonus, allowed tolerance, conformance as measured (no shift) and the deviation after the pattern’s group shift.',
     },
+    { name: 'datumShift', label: 'Datum feature shift available', kind: 'length', description: 'Departure of the datum feature’s actual size from its MMB or LMB, a diameter; zero at RMB or without a datum feature of size.' },
     { name: 'sizeTolerance', label: 'Size tolerance', kind: 'length', description: 'Upper limit minus lower limit of the features.' },
     { name: 'maxBonus', label: 'Largest bonus', kind: 'length', description: 'Bonus at the opposite size limit; zero at RFS.' },
-    { name: 'datumShift', label: 'Datum feature shift available', kind: 'length', description: 'Departure of the datum feature’s actual size from its MMB or LMB, a diameter; zero at RMB or without a datum feature of size.' },
     { name: 'featuresConformingAsMeasured', label: 'Features conforming as measured', kind: 'number', description: 'Features within size limits and within their position zone with no shift.' },
     { name: 'conformsAsMeasured', label: 'Pattern conforms as measured', kind: 'boolean', description: 'Every feature conforms without any datum feature shift.' },
     { name: 'patternConforms', label: 'Pattern conforms', kind: 'boolean', description: 'Every feature is within size limits and one translation of the pattern within the datum feature shift brings every axis into its zone.' },

@@ -171,9 +171,9 @@ const outputKeyLabels: Record<string, string> = {
   dy: 'Δy',
   deviation: 'Position ⌀',
   allowed: 'Allowed ⌀',
-  sizeConforms: 'Size in limits',
-  conformsAsMeasured: 'Conforms as measured',
-  deviationWithShift: 'Position ⌀ after group shift',
+  sizeConforms: 'Size OK',
+  conformsAsMeasured: 'As measured',
+  deviationWithShift: '⌀ after shift',
 };
 
 const lengthOutputKeys = new Set([
