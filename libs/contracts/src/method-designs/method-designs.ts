@@ -24,9 +24,9 @@ import { formulaLimits, formulaNamePattern } from '../methods/formula.js';
  * - POST   method-designs/:slug/draft/approve {baseVersion, comment?} → MethodRevision (released; 403 own)
  * - POST   method-designs/:slug/draft/send-back {comment} → MethodRevision
  * - GET    method-designs/:slug/versions                → MethodVersionList
- * - GET    method-designs/:slug/released?version=2      → MethodRevision (one released or superseded version)
+ * - GET    method-designs/:slug/versions/:version       → MethodRevision (one released or superseded version)
  * - GET    method-designs/:slug/compare?from=1&to=2|draft → MethodCompare
- * - POST   method-designs/:slug/restore {version}       → MethodRevision (admins; new draft from that version)
+ * - POST   method-designs/:slug/versions/:version/restore → MethodRevision (admins; new draft from that version)
  * - GET    methods/:id/usage                            → MethodCatalogDetail (built-in or house:*)
  * - GET    pages/:id/lagging-blocks                     → LaggingBlocks
  * - POST   pages/:id/lagging-blocks/move-forward {blockIds, baseVersion?} → MoveBlocksForwardResponse
@@ -232,15 +232,20 @@ export type MethodDesignParams = z.infer<typeof methodDesignParamsSchema>;
 
 /** A released version number, or `draft` for the open revision. */
 const versionOrDraftSchema = z.union([z.literal('draft'), z.coerce.number().int().min(1)], { message: 'A version number or draft' });
-const versionNumberSchema = z.coerce.number({ message: 'Version is a whole number' }).int('Version is a whole number').min(1, 'Versions start at 1');
-
-export const methodVersionQuerySchema = z.strictObject({ version: versionNumberSchema });
-export type MethodVersionQuery = z.infer<typeof methodVersionQuerySchema>;
-
-export const restoreMethodVersionRequestSchema = z.strictObject({
-  version: z.number({ message: 'Version is a whole number' }).int('Version is a whole number').min(1, 'Versions start at 1'),
+/**
+ * `version` is a released version number in the path; anything that is not one (`abc`, `0`)
+ * names no version and is answered with 404, like a number that was never released.
+ */
+export const methodVersionParamsSchema = z.strictObject({
+  slug: methodDesignSlugSchema,
+  version: z.string().max(20, 'No such version'),
 });
-export type RestoreMethodVersionRequest = z.infer<typeof restoreMethodVersionRequestSchema>;
+export type MethodVersionParams = z.infer<typeof methodVersionParamsSchema>;
+
+/** The version number a path segment names, or null when it names none. */
+export function parseMethodVersion(segment: string): number | null {
+  return /^[1-9]\d{0,8}$/.test(segment) ? Number(segment) : null;
+}
 
 export const methodCompareQuerySchema = z.strictObject({ from: versionOrDraftSchema, to: versionOrDraftSchema });
 export type MethodCompareQuery = z.infer<typeof methodCompareQuerySchema>;

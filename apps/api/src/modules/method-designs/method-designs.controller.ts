@@ -11,8 +11,8 @@ import {
   methodPreviewResponseSchema,
   methodRevisionSchema,
   methodVersionListSchema,
-  methodVersionQuerySchema,
-  restoreMethodVersionRequestSchema,
+  methodVersionParamsSchema,
+  parseMethodVersion,
   saveMethodDraftRequestSchema,
   sendBackRequestSchema,
   submitForReviewRequestSchema,
@@ -22,8 +22,7 @@ import {
   type DesignDefinition,
   type MethodCompareQuery,
   type MethodDesignParams,
-  type MethodVersionQuery,
-  type RestoreMethodVersionRequest,
+  type MethodVersionParams,
   type SendBackRequest,
   type SubmitForReviewRequest,
 } from '@limitbook/contracts';
@@ -168,19 +167,19 @@ export class MethodDesignsController {
     return this.designs.versions(user, params.slug);
   }
 
-  @Get(':slug/released')
+  @Get(':slug/versions/:version')
   @Roles(...AnySignedIn)
-  @ApiContract({ summary: 'One released or superseded version, by number', response: methodRevisionSchema, tag })
-  version(@ValidParams(methodDesignParamsSchema) params: MethodDesignParams, @ValidQuery(methodVersionQuerySchema) query: MethodVersionQuery) {
-    return this.designs.version(params.slug, query.version);
+  @ApiContract({ summary: 'One released or superseded version, by number (404 for anything else)', response: methodRevisionSchema, tag })
+  version(@ValidParams(methodVersionParamsSchema) params: MethodVersionParams) {
+    return this.designs.version(params.slug, parseMethodVersion(params.version));
   }
 
-  @Post(':slug/restore')
+  @Post(':slug/versions/:version/restore')
   @HttpCode(200)
   @Roles('admin')
   @ApiContract({ summary: "Start a new draft from an earlier version's definition (409 while a version is open)", response: methodRevisionSchema, tag })
-  restore(@CurrentUser() actor: AuthUser, @ValidParams(methodDesignParamsSchema) params: MethodDesignParams, @ValidBody(restoreMethodVersionRequestSchema) body: RestoreMethodVersionRequest) {
-    return this.designs.restore(actor, params.slug, body.version);
+  restore(@CurrentUser() actor: AuthUser, @ValidParams(methodVersionParamsSchema) params: MethodVersionParams) {
+    return this.designs.restore(actor, params.slug, parseMethodVersion(params.version));
   }
 
   @Get(':slug/compare')

@@ -285,9 +285,9 @@ export class MethodDesignsService {
     };
   }
 
-  async version(slug: string, methodVersion: number): Promise<MethodRevision> {
+  async version(slug: string, methodVersion: number | null): Promise<MethodRevision> {
     const design = await this.requireDesign(slug);
-    const row = await this.repository.findReleased(design.id, methodVersion);
+    const row = methodVersion === null ? undefined : await this.repository.findReleased(design.id, methodVersion);
     if (!row) throw MethodDesignsException.of('version-not-found');
     return this.revisionView(design, row, false);
   }
@@ -312,10 +312,10 @@ export class MethodDesignsService {
   }
 
   /** A new draft holding an earlier version's definition; refused while a version is open. */
-  async restore(actor: AuthUser, slug: string, methodVersion: number): Promise<MethodRevision> {
+  async restore(actor: AuthUser, slug: string, methodVersion: number | null): Promise<MethodRevision> {
     const { design, draft } = await this.repository.transaction(async (tx) => {
       const design = await this.lockDesign(slug, tx);
-      const source = await this.repository.findReleased(design.id, methodVersion, tx);
+      const source = methodVersion === null ? undefined : await this.repository.findReleased(design.id, methodVersion, tx);
       if (!source) throw MethodDesignsException.of('version-not-found');
       if (await this.repository.findOpen(design.id, tx)) throw MethodDesignsException.of('restore-open-revision');
       const draft = await this.repository.insertRevision(

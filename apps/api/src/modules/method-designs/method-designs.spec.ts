@@ -210,8 +210,10 @@ describe('in-house method designs', () => {
     await as('author').post('/api/method-designs/cord-squeeze/draft/submit', { reviewerIds: [reviewerId] }).expect(409);
     await as('reviewer').post('/api/method-designs/cord-squeeze/draft/approve', { baseVersion: 1 }).expect(409);
     await as('author').post('/api/method-designs/cord-squeeze/draft/run-tests').expect(404);
-    expect((await as('reader').get('/api/method-designs/cord-squeeze/released?version=1').expect(200)).body.definition.tests[0].expected.squeeze.value).toBe(20.68);
+    expect((await as('reader').get('/api/method-designs/cord-squeeze/versions/1').expect(200)).body.definition.tests[0].expected.squeeze.value).toBe(20.68);
     expect((await as('reader').get('/api/method-designs/cord-squeeze').expect(200)).body).toMatchObject({ latestVersion: 1, draft: null });
+    await as('reader').get('/api/method-designs/cord-squeeze/versions/2').expect(404);
+    await as('reader').get('/api/method-designs/cord-squeeze/versions/first').expect(404);
   });
 
   it('releases version 2 superseding 1, compares them, and keeps pinned evaluations on version 1', { timeout: 120_000 }, async () => {
@@ -260,11 +262,11 @@ describe('in-house method designs', () => {
   });
 
   it('lets an admin restore an earlier version as a new draft', async () => {
-    await as('author').post('/api/method-designs/cord-squeeze/restore', { version: 1 }).expect(403);
-    const restored = await as('admin').post('/api/method-designs/cord-squeeze/restore', { version: 1 }).expect(200);
+    await as('author').post('/api/method-designs/cord-squeeze/versions/1/restore').expect(403);
+    const restored = await as('admin').post('/api/method-designs/cord-squeeze/versions/1/restore').expect(200);
     expect(restored.body).toMatchObject({ state: 'draft', methodVersion: null, restoredFromVersion: 1, problems: {} });
     expect(restored.body.definition.outputs[0].expression).toBe('100 * (cord - depth) / cord');
-    await as('admin').post('/api/method-designs/cord-squeeze/restore', { version: 1 }).expect(409);
+    await as('admin').post('/api/method-designs/cord-squeeze/versions/1/restore').expect(409);
     const compare = await as('author').get('/api/method-designs/cord-squeeze/compare?from=2&to=draft').expect(200);
     expect(compare.body.to).toMatchObject({ state: 'draft', methodVersion: null });
     await as('author').delete('/api/method-designs/cord-squeeze/draft').expect(204);
