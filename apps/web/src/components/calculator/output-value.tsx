@@ -28,6 +28,16 @@ function Scalar({ value, unit, keyName }: { value: unknown; unit: string; keyNam
 export function OutputValue({ description, value, unit }: { description: OutputDescription | undefined; value: unknown; unit: string }) {
   const kind = description?.kind;
   if (isFormulaQuantity(value)) {
+    // In-house outputs carry the text rounded to the decimals their author declared; show that, not every digit.
+    const rounded = typeof value.text === 'string' ? /^-?\d+(\.\d+)?/.exec(value.text.trim())?.[0] : undefined;
+    if (rounded) {
+      return (
+        <span className={classes.quantity}>
+          <span className={classes.number}>{rounded.replace('-', '\u2212')}</span>
+          {value.unit ? <span className={classes.quantityUnit}>{`\u00a0${value.unit}`}</span> : null}
+        </span>
+      );
+    }
     return <Quantity value={value.value} unit={value.unit ?? undefined} />;
   }
   if (typeof value === 'number') {

@@ -1,6 +1,6 @@
 import { ActionIcon, Badge, Button, Group, Loader, SegmentedControl, Select, Stack, Text, TextInput, Tooltip } from '@mantine/core';
 import { maxCaptionLength, type AcceptanceRule } from '@limitbook/editor-schema';
-import type { LengthUnit, MethodSummary } from '@limitbook/contracts';
+import { isHouseMethodId, type LengthUnit, type MethodSummary } from '@limitbook/contracts';
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import { IconCalculator, IconGripVertical, IconLock, IconTrash } from '@tabler/icons-react';
 import { useState } from 'react';
@@ -38,7 +38,9 @@ export function CalculatorBlockView({ node, updateAttributes, deleteNode, select
   const chooseMethod = (id: string | null) => {
     if (!id || id === attrs.method) return;
     // Defaults, locks and the rule belong to a method's inputs and outputs; they do not carry over.
-    updateAttributes({ method: id, methodVersion: null, defaults: {}, locked: [], acceptance: null });
+    // An in-house method is pinned to the release picked, so a later version cannot change the page unseen.
+    const picked = methods.data?.items.find((item) => item.id === id);
+    updateAttributes({ method: id, methodVersion: picked && isHouseMethodId(picked.id) ? picked.version : null, defaults: {}, locked: [], acceptance: null });
   };
 
   const heading = method?.title ?? (attrs.method ? attrs.method : 'New calculator');
@@ -185,10 +187,13 @@ function ConfiguredBlock({ method, attrs, editing, updateAttributes }: Configure
 }
 
 function methodOptions(items: readonly MethodSummary[]) {
-  const builtIn = items.filter((item) => item.id !== 'formula').map((item) => ({ value: item.id, label: item.title }));
+  const inHouse = (item: MethodSummary) => item.source === 'in-house' || isHouseMethodId(item.id);
+  const builtIn = items.filter((item) => item.id !== 'formula' && !inHouse(item)).map((item) => ({ value: item.id, label: item.title }));
   const formula = items.filter((item) => item.id === 'formula').map((item) => ({ value: item.id, label: item.title }));
+  const house = items.filter(inHouse).map((item) => ({ value: item.id, label: `${item.title} (v${item.version})` }));
   return [
     { group: 'Built-in methods', items: builtIn },
+    ...(house.length > 0 ? [{ group: 'In-house methods', items: house }] : []),
     ...(formula.length > 0 ? [{ group: 'In-house formulas', items: formula }] : []),
   ];
 }

@@ -25,7 +25,7 @@ function Formulas({ definition, tex, list }: { definition: DesignDefinition; tex
             <Table.Tr>
               <Table.Th w={200}>Value</Table.Th>
               <Table.Th>Formula</Table.Th>
-              <Table.Th w={110}>Shown in</Table.Th>
+              <Table.Th w={170}>Shown in</Table.Th>
             </Table.Tr>
           </Table.Thead>
           <Table.Tbody>

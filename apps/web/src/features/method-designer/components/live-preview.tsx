@@ -6,6 +6,10 @@ import { errorMessage } from '@/components/form/server-errors';
 import type { useLivePreview } from '../hooks/use-live-preview';
 import classes from './designer.module.css';
 
+function withStop(text: string): string {
+  return /[.!?]$/.test(text.trim()) ? text.trim() : `${text.trim()}.`;
+}
+
 /** What readers would see for the definition on screen, so the result panel labels outputs as they will. */
 export function previewSummary(methodId: string, definition: DesignDefinition): MethodSummary {
   return {
@@ -64,11 +68,15 @@ export function LivePreview({ preview, methodId, definition }: Props) {
       ) : outcome.ok ? (
         <Stack gap="md" opacity={preview.updating ? 0.6 : 1}>
           <ResultPanel result={outcome.response.result} method={previewSummary(methodId, definition)} />
-          {outcome.response.result.steps.length > 0 && <DerivationSteps steps={outcome.response.result.steps} />}
+          {outcome.response.result.steps.length > 0 && (
+            <div className={classes.scrollX}>
+              <DerivationSteps steps={outcome.response.result.steps} />
+            </div>
+          )}
         </Stack>
       ) : (
         <Alert color="amber" variant="light" icon={<IconAlertTriangle size={18} />} title="Not evaluated" role="alert">
-          {problemCount > 0 ? `${outcome.message} See the ${problemCount === 1 ? 'message' : `${problemCount} messages`} at the fields.` : outcome.message}
+          {problemCount > 0 ? `${withStop(outcome.message)} See the ${problemCount === 1 ? 'message' : `${problemCount} messages`} at the fields.` : outcome.message}
         </Alert>
       )}
     </section>

@@ -2,7 +2,7 @@ import { ActionIcon, Badge, Button, Group, Select, Stack, Table, Text, TextInput
 import { designLimits, type DesignTestRow, type TestRowResult, type TestRun } from '@limitbook/contracts';
 import { IconCheck, IconPlayerPlay, IconPlus, IconTrash, IconX } from '@tabler/icons-react';
 import { formatNumber } from '@/components/calculator';
-import { newTestRow } from '../lib/definition';
+import { newTestRow, roundTo } from '../lib/definition';
 import { errorAt, type DesignerSection } from './designer-context';
 import { NumberTextInput } from './number-text-input';
 import classes from './designer.module.css';
@@ -15,7 +15,7 @@ type Props = DesignerSection & {
   onRun: () => void;
 };
 
-function RowResult({ result, outdated }: { result: TestRowResult | undefined; outdated: boolean }) {
+function RowResult({ result, outdated, decimals }: { result: TestRowResult | undefined; outdated: boolean; decimals: Record<string, number> }) {
   if (!result) return <Text size="xs" c="dimmed">Not run</Text>;
   return (
     <Stack gap={4} data-row-result={result.pass ? 'pass' : 'fail'} opacity={outdated ? 0.55 : 1}>
@@ -25,8 +25,8 @@ function RowResult({ result, outdated }: { result: TestRowResult | undefined; ou
       {result.outputs.map((check) => (
         <Text key={check.output} size="xs" className={check.pass ? classes.pass : classes.fail}>
           <span className={classes.mono}>{check.output}</span>{' '}
-          {check.actual === null ? 'not computed' : `${formatNumber(check.actual)}${check.unit ? ` ${check.unit}` : ''}`}
-          {!check.pass && check.difference !== null ? ` (off by ${formatNumber(check.difference)})` : ''}
+          {check.actual === null ? 'not computed' : `${formatNumber(roundTo(check.actual, decimals[check.output]))}${check.unit ? ` ${check.unit}` : ''}`}
+          {!check.pass && check.difference !== null ? ` (expected ${formatNumber(check.expected)}, off by ${formatNumber(roundTo(check.difference, (decimals[check.output] ?? 3) + 1))})` : ''}
         </Text>
       ))}
       {result.expectedVerdict && result.verdict !== result.expectedVerdict && (
@@ -47,6 +47,7 @@ function RowResult({ result, outdated }: { result: TestRowResult | undefined; ou
 export function TestTableEditor({ run, runOutdated, running, onRun, ...section }: Props) {
   const { form, readOnly } = section;
   const { inputs, outputs, tests } = form.values;
+  const decimals = Object.fromEntries(outputs.map((output) => [output.name, output.decimals]));
   const setRow = (index: number, row: DesignTestRow) => form.setFieldValue(`tests.${index}`, row);
   const setInput = (index: number, row: DesignTestRow, name: string, value: number | null) => {
     const next = { ...row.inputs };
@@ -112,7 +113,7 @@ export function TestTableEditor({ run, runOutdated, running, onRun, ...section }
                 <Table.Tr key={index} data-test-row={index}>
                   <Table.Td className={classes.numeric}>{index + 1}</Table.Td>
                   <Table.Td>
-                    <TextInput size="xs" aria-label={`Case ${index + 1}`} value={row.label} onChange={(event) => setRow(index, { ...row, label: event.currentTarget.value })} readOnly={readOnly} />
+                    <TextInput size="xs" miw={130} aria-label={`Case ${index + 1}`} value={row.label} onChange={(event) => setRow(index, { ...row, label: event.currentTarget.value })} readOnly={readOnly} />
                     {rowError && (
                       <Text size="xs" className={classes.fail} mt={4} role="alert">
                         {rowError}
@@ -123,6 +124,7 @@ export function TestTableEditor({ run, runOutdated, running, onRun, ...section }
                     <Table.Td key={`in-${input.name}`}>
                       <NumberTextInput
                         size="xs"
+                        miw={84}
                         aria-label={`${input.name}, row ${index + 1}`}
                         placeholder={input.default !== null ? formatNumber(input.default) : undefined}
                         value={row.inputs[input.name] ?? null}
@@ -137,7 +139,7 @@ export function TestTableEditor({ run, runOutdated, running, onRun, ...section }
                       <Group gap={4} wrap="nowrap">
                         <NumberTextInput
                           size="xs"
-                          w={90}
+                          miw={84}
                           aria-label={`Expected ${output.name}, row ${index + 1}`}
                           value={row.expected[output.name]?.value ?? null}
                           onChange={(value) => setExpected(index, row, output.name, 'value', value)}
@@ -149,7 +151,7 @@ export function TestTableEditor({ run, runOutdated, running, onRun, ...section }
                         </Text>
                         <NumberTextInput
                           size="xs"
-                          w={70}
+                          miw={64}
                           aria-label={`Tolerance of ${output.name}, row ${index + 1}`}
                           placeholder="0"
                           value={row.expected[output.name]?.tolerance || null}
@@ -177,7 +179,7 @@ export function TestTableEditor({ run, runOutdated, running, onRun, ...section }
                     />
                   </Table.Td>
                   <Table.Td>
-                    <RowResult result={run?.rows.find((result) => result.index === index)} outdated={runOutdated} />
+                    <RowResult result={run?.rows.find((result) => result.index === index)} outdated={runOutdated} decimals={decimals} />
                   </Table.Td>
                   {!readOnly && (
                     <Table.Td>

@@ -71,3 +71,8 @@ export function renameInTests(tests: DesignTestRow[], section: 'inputs' | 'expec
     return { ...row, [section]: next };
   });
 }
+
+/** What an output shows: the computed value at its declared decimals. */
+export function roundTo(value: number, decimals: number | undefined): number {
+  return decimals === undefined ? value : Number(value.toFixed(decimals));
+}

@@ -83,9 +83,15 @@ export function MethodRunPanel({ method }: { method: MethodSummary }) {
                     aria-expanded={showSteps}
                     rightSection={<IconChevronDown size={14} style={{ transform: showSteps ? 'rotate(180deg)' : undefined }} />}
                   >
-                    {showSteps ? 'Hide derivation' : `Show derivation (${view.result.steps.length} steps)`}
+                    {showSteps ? 'Hide derivation' : `Show derivation (${view.result.steps.length} ${view.result.steps.length === 1 ? 'step' : 'steps'})`}
                   </Button>
-                  <Collapse expanded={showSteps}>{showSteps && <DerivationSteps steps={view.result.steps} references={method.references} />}</Collapse>
+                  <Collapse expanded={showSteps}>
+                    {showSteps && (
+                      <div className={classes.scrollX}>
+                        <DerivationSteps steps={view.result.steps} references={method.references} />
+                      </div>
+                    )}
+                  </Collapse>
                 </div>
               )}
             </>

@@ -5,7 +5,9 @@ import { Link, useParams } from 'react-router-dom';
 import { useMethods } from '@/components/calculator';
 import { PanelError } from '@/components/errors/panel-error';
 import { paths } from '@/config/paths';
+import { useQuery } from '@tanstack/react-query';
 import { useMethodDesign } from '@/features/method-designer/api/get-method-design';
+import { getMethodVersionQueryOptions } from '@/features/method-designer/api/get-method-versions';
 import { DefinitionView } from '@/features/method-designer/components/definition-view';
 import { VersionHistory } from '@/features/method-designer/components/version-history';
 import { MethodOverview } from '@/features/methods/components/method-overview';
@@ -21,6 +23,8 @@ export function MethodRoute() {
   const method = methods.byId(methodId);
   const slug = slugOf(methodId);
   const design = useMethodDesign(slug ?? '', !!slug);
+  // The released version itself carries the TeX of every formula.
+  const released = useQuery({ ...getMethodVersionQueryOptions(slug ?? '', method?.version ?? 0), enabled: !!slug && !!method });
   useDocumentTitle(`${method?.title ?? methodId} · Methods · Limitbook`);
 
   if (methods.isPending) return <Skeleton h={400} />;
@@ -45,7 +49,6 @@ export function MethodRoute() {
   const canEdit = !!slug && canAccess(user.role, 'standards.edit');
   const inReview = design.data?.draft?.state === 'in_review';
   const canReview = inReview && canAccess(user.role, 'standards.review');
-  const released = design.data?.released;
 
   return (
     <MethodOverview
@@ -64,7 +67,7 @@ export function MethodRoute() {
           )}
         </>
       }
-      definition={slug ? released ? <DefinitionView definition={released.definition} tex={released.tex} /> : design.isError ? <PanelError error={design.error} title="The definition could not be loaded" /> : <Skeleton h={160} /> : undefined}
+      definition={slug ? released.data ? <DefinitionView definition={released.data.definition} tex={released.data.tex} /> : released.isError ? <PanelError error={released.error} title="The definition could not be loaded" /> : <Skeleton h={160} /> : undefined}
       history={slug ? <VersionHistory slug={slug} canRestore={user.role === 'admin'} /> : undefined}
       run={<MethodRunPanel method={method} />}
     />
