@@ -107,7 +107,7 @@ export function ReleaseImpactPanel({ pageId, revisionId, revisionLetter, compact
       ? `${label} changes no calculator setting: no saved record needs a second look.`
       : changed === 0
         ? `${report.recordsChecked} saved record${report.recordsChecked === 1 ? '' : 's'} re-run under ${label}: every verdict and key output stays the same.`
-        : `${changed} of ${report.recordsChecked} saved record${report.recordsChecked === 1 ? '' : 's'} come out differently under ${label}. Their owners have been sent a mail.`;
+        : `${changed} of ${report.recordsChecked} saved record${report.recordsChecked === 1 ? '' : 's'} ${changed === 1 ? 'comes' : 'come'} out differently under ${label}. ${changed === 1 ? 'Its owner has' : 'Their owners have'} been sent a mail.`;
 
   return (
     <Alert

@@ -94,7 +94,7 @@ export function SaveRecordButton({ inputs, unit, evaluated, ...target }: Props) 
               <TextInput label="Part number" maxLength={100} {...form.getInputProps('reference.partNumber')} />
               <TextInput label="Drawing" maxLength={100} {...form.getInputProps('reference.drawing')} />
             </Group>
-            <Textarea label="Note" autosize minRows={2} maxLength={2000} {...form.getInputProps('reference.note')} />
+            <Textarea label="Note" rows={3} maxLength={2000} {...form.getInputProps('reference.note')} />
             <Group justify="flex-end">
               <Button variant="default" onClick={close}>
                 Cancel

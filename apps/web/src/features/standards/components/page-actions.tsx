@@ -48,7 +48,7 @@ function ObsoleteModal({ page, opened, onClose }: { page: Page; opened: boolean;
               {problem}
             </Alert>
           )}
-          <Textarea label="Reason" description="Say what replaces it, if anything." required autosize minRows={3} maxLength={2000} {...form.getInputProps('reason')} />
+          <Textarea label="Reason" description="Say what replaces it, if anything." required rows={3} maxLength={2000} {...form.getInputProps('reason')} />
           <Group justify="flex-end">
             <Button variant="default" onClick={close}>
               Cancel
