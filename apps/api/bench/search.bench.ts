@@ -34,6 +34,13 @@ function generatedDocument(index: number) {
     content.push({ type: 'paragraph', content: [{ type: 'text', text: sentence(40) }] });
   }
   if (index % 10 === 0) content.push({ type: 'paragraph', content: [{ type: 'text', text: `Give the port a position tolerance at LMC. ${sentence(10)}` }] });
+  // Formulas are indexed by their LaTeX source; fixed text, so the seeded sentences stay as they were.
+  if (index % 10 === 5) {
+    content.push({
+      type: 'paragraph',
+      content: [{ type: 'text', text: 'The wall holds while' }, { type: 'inlineMath', attrs: { latex: 'p_{burst} = \\frac{2\\,t\\,S}{d}' } }, { type: 'text', text: 'stays above the proof pressure.' }],
+    });
+  }
   const hex = index.toString(16).padStart(12, '0');
   content.push({
     type: 'calculatorBlock',
@@ -77,6 +84,7 @@ async function main(): Promise<void> {
     ['a rare word', { q: filler[1234]! }],
     ['a document number prefix', { q: 'BN-STD-001' }],
     ['a word with a tag filter', { q: 'flange', tag: 'bolt' }],
+    ['a symbol inside a formula', { q: 'burst' }],
   ];
   console.log(`\nGET /api/search service time, ${runs} runs each after one warm-up (ms)`);
   console.log('query                         matches    p50    p95    max');
