@@ -98,8 +98,9 @@ describe('position-check method', () => {
   it('fails a feature outside its size limits with no bonus, and the pattern with it', () => {
     const features = measured([[0, 0], [0, 0], [0, 0], [0, 0]]);
     features[1] = { ...features[1]!, actualSize: 10.21 };
-    const { outputs, warnings } = run({ ...base, features });
+    const { outputs, warnings, verdict } = run({ ...base, features });
     expect(outputs.features[1]).toMatchObject({ sizeConforms: false, bonus: 0, conformsAsMeasured: false });
+    expect(verdict?.summary).toBe('Pattern does not conform: 1 of 4 features outside their size limits.');
     expect(outputs.patternConforms).toBe(false);
     expect(warnings.join(' ')).toMatch(/Outside the size limits .*H2/);
   });

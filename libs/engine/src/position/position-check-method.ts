@@ -204,14 +204,16 @@ export const positionCheckMethod = defineMethod({
         ? shiftNeeded
           ? `Pattern conforms with datum feature shift: ${features.length - conformingCount} of ${features.length} features are outside their zone as measured and within it after the group shift.`
           : `Pattern conforms as measured: all ${features.length} features within size and position.`
-        : `Pattern does not conform: ${failingSize.length + failingPosition.length} of ${features.length} features outside ${failingSize.length > 0 ? 'size or ' : ''}position${datumShift > 0 ? ' even with the datum feature shift' : ''}.`,
+        : failingSize.length > 0
+          ? `Pattern does not conform: ${failingSize.length} of ${features.length} features outside their size limits${failingPosition.length > 0 ? `, ${failingPosition.length} outside position as measured` : ''}.`
+          : `Pattern does not conform: ${failingPosition.length} of ${features.length} features outside position${datumShift > 0 ? ', and no group shift within the datum feature shift brings them all in' : ''}.`,
       checks: [
         { label: 'Sizes within limits', pass: allSizesConform, detail: `${features.length - failingSize.length} of ${features.length}` },
         { label: 'Position as measured (no shift)', pass: conformsAsMeasured, detail: `${conformingCount} of ${features.length}${failingPosition.length ? `; outside: ${listLabels(failingPosition)}` : ''}` },
         {
           label: 'Pattern with datum feature shift',
           pass: patternConforms,
-          detail: datumShift > 0 ? `shift available ${show(datumShift)}` : 'no datum feature shift available',
+          detail: !allSizesConform ? 'not applicable: a feature is outside its size limits' : datumShift > 0 ? `shift available ${show(datumShift)}` : 'no datum feature shift available',
         },
       ],
     };

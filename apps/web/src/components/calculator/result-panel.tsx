@@ -79,7 +79,7 @@ function SimpleTable({ rows, unit, caption }: { rows: Record<string, unknown>[];
   const keys = Object.keys(rows[0] ?? {});
   return (
     <Table.ScrollContainer minWidth={320}>
-      <Table striped withTableBorder verticalSpacing={4} className={classes.dataTable}>
+      <Table striped withTableBorder verticalSpacing={4} horizontalSpacing={6} className={classes.dataTable}>
         <caption className={classes.tableCaption}>{caption}</caption>
         <Table.Thead>
           <Table.Tr>
