@@ -71,7 +71,7 @@ describe('RevisionCompareView', () => {
   });
 
   it('asks for two different revisions instead of comparing one with itself', async () => {
-    const fetch = vi.fn(async () => jsonResponse(200, history));
+    const fetch = vi.fn(async (_url: string) => jsonResponse(200, history));
     vi.stubGlobal('fetch', fetch);
     render(<RevisionCompareView page={page} from={revA} to={revA} />);
     expect(await screen.findByText('Pick two different revisions.')).toBeInTheDocument();
