@@ -3,6 +3,7 @@ import { listCalculatorBlocks, type LimitbookDocument } from '@limitbook/editor-
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { methodDesignRevisions, users } from '../../database/schema/index.js';
+import { SeedService } from '../../seed/seed.service.js';
 import { createTestApp, type TestApp } from '../../testing/test-app.js';
 
 // Squeeze = (cross-section − gland depth)/cross-section (Parker O-Ring Handbook ORD 5700, gland design; from memory).
@@ -62,6 +63,13 @@ describe('in-house method designs', () => {
     expect(designs.body.items.map((item: { id: string }) => item.id)).toEqual(expect.arrayContaining(['house:o-ring-squeeze', 'house:press-fit-pressure']));
     const design = await as('reader').get('/api/method-designs/o-ring-squeeze').expect(200);
     expect(design.body).toMatchObject({ latestVersion: 1, draft: null, released: { state: 'released', methodVersion: 1, approvedBy: { email: t.demoPerson('reviewer').email } } });
+    expect(design.body.owner.email).toBe(t.demoPerson('author').email);
+
+    // `npm run seed` again: unchanged methods stay at version 1.
+    const before = await t.rowCounts();
+    await t.app.get(SeedService).run('reload');
+    const after = await t.rowCounts();
+    expect([after.method_designs, after.method_design_revisions]).toEqual([before.method_designs, before.method_design_revisions]);
   });
 
   it('evaluates the demo pages’ in-house blocks through POST /api/evaluate at their pinned version', { timeout: 120_000 }, async () => {
