@@ -27,9 +27,11 @@ export function useMethodReviewDecision(slug: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (decision: Decision) => (decision.kind === 'approve' ? approveMethodRevision(slug, decision.body) : sendBackMethodRevision(slug, decision.body)),
-    onSuccess: async (_revision, decision) => {
-      queryClient.removeQueries({ queryKey: methodDesignKeys.draft(slug) });
-      await queryClient.invalidateQueries({ queryKey: methodDesignKeys.all });
+    // After a decision the open revision is released, or a draft a reviewer may not read: the page
+    // being left keeps the answer, and everything is marked stale rather than refetched into a 404.
+    onSuccess: async (revision, decision) => {
+      queryClient.setQueryData(methodDesignKeys.draft(slug), revision);
+      await queryClient.invalidateQueries({ queryKey: methodDesignKeys.all, refetchType: 'none' });
       if (decision.kind === 'approve') await queryClient.invalidateQueries({ queryKey: getMethodsQueryOptions().queryKey });
     },
   });
