@@ -269,6 +269,22 @@ describe('in-house method designs', () => {
     expect(usage.body).toMatchObject({ source: 'in-house', latestVersion: 2, usages: [], tests: [{ label: 'ORD 5700 definition' }] });
   });
 
+  it('refuses approval by an admin who wrote the version, and deletes a never-released method with its draft', { timeout: 60_000 }, async () => {
+    await as('admin').post('/api/method-designs', { slug: 'admin-squeeze', definition: squeezeDefinition() }).expect(201);
+    const submitted = await as('admin').post('/api/method-designs/admin-squeeze/draft/submit', { reviewerIds: [reviewerId] }).expect(200);
+    const own = await as('admin').post('/api/method-designs/admin-squeeze/draft/approve', { baseVersion: submitted.body.version }).expect(403);
+    expect(own.body.message).toMatch(/another reviewer or admin/);
+    await as('admin').delete('/api/method-designs/admin-squeeze/draft').expect(409);
+    await as('admin').post('/api/method-designs/admin-squeeze/draft/withdraw').expect(200);
+    await as('admin').delete('/api/method-designs/admin-squeeze/draft').expect(204);
+    await as('admin').get('/api/method-designs/admin-squeeze').expect(404);
+    const hostile = squeezeDefinition();
+    hostile.outputs = [{ name: 'squeeze', label: 'Squeeze', expression: 'cos.constructor("return process")', unit: '', decimals: 2 }];
+    const refused = await as('author').post('/api/method-designs', { slug: 'hostile', definition: hostile }).expect(400);
+    expect(refused.body.fields['definition.outputs.0.expression']).toMatch(/^Refused/);
+    await as('author').get('/api/method-designs/hostile').expect(404);
+  });
+
   it('lets an admin restore an earlier version as a new draft', async () => {
     await as('author').post('/api/method-designs/cord-squeeze/versions/1/restore').expect(403);
     const restored = await as('admin').post('/api/method-designs/cord-squeeze/versions/1/restore').expect(200);
