@@ -11,13 +11,31 @@ import { AuditTable } from './audit-table';
 
 const pageSize = 50;
 
+// Offered even when the page shown has none of them: the revision lifecycle and records, the usual questions of a document audit.
+const documentControlActions = [
+  'page.created',
+  'page.draft_started',
+  'page.draft_deleted',
+  'page.updated',
+  'page.submitted',
+  'page.review_withdrawn',
+  'page.sent_back',
+  'page.released',
+  'page.restored',
+  'page.obsoleted',
+  'page.reinstated',
+  'page.deleted',
+  'record.created',
+  'records.impact_checked',
+];
+
 export function AuditLog() {
   const [filters, setFilters] = useState<AuditFilters>({});
   const [page, setPage] = useState(1);
   const events = useAuditEvents({ ...filters, limit: pageSize, offset: (page - 1) * pageSize });
   const exportCsv = useExportAudit();
 
-  const knownActions = useMemo(() => [...new Set(events.data?.items.map((event) => event.action) ?? [])].sort(), [events.data]);
+  const knownActions = useMemo(() => [...new Set([...documentControlActions, ...(events.data?.items.map((event) => event.action) ?? [])])].sort(), [events.data]);
   const total = events.data?.total ?? 0;
   const pages = Math.max(1, Math.ceil(total / pageSize));
 

@@ -16,8 +16,8 @@ const fields: Field[] = [
 ];
 
 describe('inputRows', () => {
-  it('writes nested values out with the method labels and marks lengths', () => {
-    expect(inputRows({ positionTolerance: 0.2, datum: { lowerLimit: 29.9, featureType: 'external' } }, fields)).toEqual([
+  it('writes nested values out with the method labels, in the method\'s order, and marks lengths', () => {
+    expect(inputRows({ datum: { featureType: 'external', lowerLimit: 29.9 }, positionTolerance: 0.2 }, fields)).toEqual([
       { path: 'positionTolerance', label: 'Position tolerance', value: '0.2', length: true },
       { path: 'datum.lowerLimit', label: 'Datum feature › Lower limit of size', value: '29.9', length: true },
       { path: 'datum.featureType', label: 'Datum feature › featureType', value: 'external', length: false },

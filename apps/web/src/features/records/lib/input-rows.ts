@@ -44,5 +44,11 @@ export function inputRows(inputs: Record<string, unknown>, fields: Field[]): Inp
     rows.push({ path, label: labels.join(' › '), value: display(value), length: known?.length ?? false });
   };
   walk(inputs, '', []);
-  return rows;
+  // In the order the method's form shows them; values the method does not describe go last.
+  const order = [...meta.keys()];
+  const rank = (path: string) => {
+    const index = order.findIndex((key) => key === path || key === path.replace(/\.\d+\./, '.*.'));
+    return index === -1 ? order.length : index;
+  };
+  return rows.map((row, index) => ({ row, index })).sort((a, b) => rank(a.row.path) - rank(b.row.path) || a.index - b.index).map(({ row }) => row);
 }
