@@ -357,5 +357,10 @@ describe('in-house method designs', () => {
       .post('/api/records', { pageId: sealPage.body.id, revisionId: sealPage.body.revision.id, blockId: sealBlock.blockId, inputs: { ...sealBlock.defaults, depthMax: 99 } })
       .expect(400);
     expect(refused.body.fields).toHaveProperty(['inputs.depthMax']);
+
+    // The impact check re-runs the record under the draft, whose block was moved to version 2 (same formulas: unaffected).
+    const draft = await as('author').get(`/api/pages/${sealPage.body.id}?view=draft`).expect(200);
+    const impact = await as('author').post(`/api/pages/${sealPage.body.id}/impact`, { fromRevisionId: sealPage.body.revision.id, toRevisionId: draft.body.revision.id }).expect(201);
+    expect(impact.body).toMatchObject({ recordsChecked: 1, affected: [], changedBlocks: [{ blockId: sealBlock.blockId, changes: ['methodVersion'] }] });
   });
 });
