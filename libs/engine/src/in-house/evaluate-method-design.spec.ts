@@ -177,3 +177,13 @@ describe('describeMethodDesign', () => {
     expect(squeezeSchema.properties.cord).toMatchObject({ minimum: 0.5, maximum: 15, description: 'Cord [mm]' });
   });
 });
+
+describe('units that are really numbers', () => {
+  it('refuses "1/mm" as a unit (it is the number 1 over mm) at the field, and accepts mm^-1', () => {
+    const reciprocal = define({ ...squeeze, outputs: [{ name: 'k', label: 'k', expression: '1 / cord', unit: '1/mm' }], checks: [], tests: [] });
+    expect(failure(() => evaluateMethodDesign(reciprocal, {})).fields['outputs.0.unit']).toMatch(/not a unit mathjs knows/);
+    const fixed = define({ ...reciprocal, outputs: [{ name: 'k', label: 'k', expression: '1 / cord', unit: 'mm^-1', decimals: 4 }] });
+    // 1/3.53 mm = 0.2833 mm⁻¹ (arithmetic).
+    expect(evaluateMethodDesign(fixed, {}).outputs.k).toMatchObject({ unit: 'mm^-1', text: '0.2833 mm^-1' });
+  });
+});

@@ -232,9 +232,13 @@ function inDisplayUnit(
   } else {
     const target = parseUnitText(unit, sandbox);
     if (!target) return { problem: `"${unit}" is not a unit mathjs knows` };
-    const quantity = sandbox.math.unit(computed.value, computed.unit);
-    if (!quantity.equalBase(target)) return { problem: `Result is in ${computed.unit} but the ${isOutput ? "output's" : "intermediate's"} unit is ${unit}` };
-    value = quantity.toNumber(unit);
+    try {
+      const quantity = sandbox.math.unit(computed.value, computed.unit);
+      if (!quantity.equalBase(target)) return { problem: `Result is in ${computed.unit} but the ${isOutput ? "output's" : "intermediate's"} unit is ${unit}` };
+      value = quantity.toNumber(unit);
+    } catch (error) {
+      return { problem: `Cannot show the result (${computed.text}) in ${unit}: ${error instanceof Error ? error.message : String(error)}` };
+    }
     shownUnit = unit;
   }
   const clean = value === 0 ? 0 : Number(value.toPrecision(12));

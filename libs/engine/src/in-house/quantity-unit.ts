@@ -5,6 +5,8 @@ import type { SandboxedMath } from '../formula/sandboxed-math.js';
 /** A unit written by the author (mm, MPa, N m), read by mathjs' unit parser: a unit, never an expression. */
 export function parseUnitText(text: string, { math }: SandboxedMath): Unit | undefined {
   try {
+    // A unit alone has no value ("1/mm" is the number 1 over mm, not a unit).
+    if (!isUnit(math.unit(text)) || math.unit(text).value !== null) return undefined;
     const unit = math.unit(1, text);
     return isUnit(unit) ? unit : undefined;
   } catch {

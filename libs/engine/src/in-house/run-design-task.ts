@@ -28,6 +28,8 @@ export function runDesignTask(task: DesignTask): DesignTaskOutcome {
     }
   } catch (error) {
     if (error instanceof EngineError) return { ok: false, code: error.code, message: error.message, fields: error.fields };
-    throw error;
+    // Whatever mathjs throws that the checks above did not foresee is the definition's problem, never a server error.
+    const message = `The method cannot be evaluated: ${error instanceof Error ? error.message : String(error)}`;
+    return { ok: false, code: 'INVALID_INPUT', message, fields: { outputs: message } };
   }
 }
