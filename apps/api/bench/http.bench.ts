@@ -1,8 +1,10 @@
 // Throughput and latency of the evaluation routes at 50 concurrent connections on loopback,
 // next to a bare node:http server answering the same JSON in the same run: the ratio is the figure.
+// Server CPU time per request (Linux /proc) is printed too: on a shared, busy machine requests/s
+// swing with the load, while CPU per request stays close to the work the server really does.
 // Needs the built server (npm run bench builds it first). Run: npx tsx apps/api/bench/http.bench.ts
-import { spawn, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
+import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
@@ -70,9 +72,28 @@ interface Measured {
   'p50 ms': number;
   'p99 ms': number;
   errors: number;
+  'server CPU ms/request': number | string;
 }
 
-async function measure(target: string, url: string, body: unknown, headers: Record<string, string>): Promise<Measured> {
+const clockTicksPerSecond = (() => {
+  try {
+    return Number(execFileSync('getconf', ['CLK_TCK'], { encoding: 'utf8' }).trim()) || 100;
+  } catch {
+    return 100;
+  }
+})();
+
+/** User + system CPU time of a process and all its threads so far, in ms; null where /proc is not there. */
+function cpuMs(pid: number | undefined): number | null {
+  const file = `/proc/${pid}/stat`;
+  if (pid === undefined || !existsSync(file)) return null;
+  // Fields after the command name, which is in parentheses and may hold spaces.
+  const fields = readFileSync(file, 'utf8').split(') ')[1]!.split(' ');
+  return ((Number(fields[11]) + Number(fields[12])) * 1000) / clockTicksPerSecond;
+}
+
+async function measure(target: string, url: string, body: unknown, headers: Record<string, string>, serverPid: number | undefined): Promise<Measured> {
+  const cpuBefore = cpuMs(serverPid);
   const result = await autocannon({
     url,
     method: 'POST',
@@ -81,12 +102,14 @@ async function measure(target: string, url: string, body: unknown, headers: Reco
     headers: { 'content-type': 'application/json', ...headers },
     body: JSON.stringify(body),
   });
+  const cpuAfter = cpuMs(serverPid);
   return {
     target,
     'requests/s': Math.round(result.requests.average),
     'p50 ms': result.latency.p50,
     'p99 ms': result.latency.p99,
     errors: result.errors + result.non2xx,
+    'server CPU ms/request': cpuBefore === null || cpuAfter === null || result.requests.total === 0 ? '-' : Number(((cpuAfter - cpuBefore) / result.requests.total).toFixed(3)),
   };
 }
 
@@ -135,10 +158,10 @@ async function main(): Promise<void> {
     await new Promise((wait) => setTimeout(wait, 500));
 
     const rows: Measured[] = [];
-    rows.push(await measure('POST /api/methods/wall-thickness/evaluate', singleUrl, { inputs: wallInputs }, auth));
-    rows.push(await measure('bare node:http, same JSON', `http://127.0.0.1:${barePort}/single`, { inputs: wallInputs }, {}));
-    rows.push(await measure(`POST /api/evaluate (${batch.items.length} items)`, batchUrl, batch, auth));
-    rows.push(await measure('bare node:http, same JSON', `http://127.0.0.1:${barePort}/batch`, batch, {}));
+    rows.push(await measure('POST /api/methods/wall-thickness/evaluate', singleUrl, { inputs: wallInputs }, auth, server.pid));
+    rows.push(await measure('bare node:http, same JSON', `http://127.0.0.1:${barePort}/single`, { inputs: wallInputs }, {}, bare.pid));
+    rows.push(await measure(`POST /api/evaluate (${batch.items.length} items)`, batchUrl, batch, auth, server.pid));
+    rows.push(await measure('bare node:http, same JSON', `http://127.0.0.1:${barePort}/batch`, batch, {}, bare.pid));
     console.log(`\nHTTP evaluation, ${connections} connections, ${durationSeconds} s each, loopback`);
     console.table(rows);
     console.log(`Limitbook / bare ratio: single ${(rows[0]!['requests/s'] / rows[1]!['requests/s']).toFixed(3)}, batch ${(rows[2]!['requests/s'] / rows[3]!['requests/s']).toFixed(3)}`);
