@@ -211,14 +211,14 @@ export function MethodDesigner({ slug, revision: initial }: { slug: string; revi
           <Block title="References and cautions" id="texts-title">
             <TextsEditor {...section} />
           </Block>
-          <Block title="Test table" id="tests-title">
-            <TestTableEditor {...section} run={testRun?.run ?? null} runOutdated={!!testRun && testRun.key !== key} running={tests.isPending || session.phase === 'saving'} onRun={() => void runTests()} />
-          </Block>
         </Stack>
         <div className={classes.sticky}>
           <LivePreview preview={preview} methodId={methodId} definition={definition} />
         </div>
       </div>
+      <Block title="Test table" id="tests-title">
+        <TestTableEditor {...section} run={testRun?.run ?? null} runOutdated={!!testRun && testRun.key !== key} running={tests.isPending || session.phase === 'saving'} onRun={() => void runTests()} />
+      </Block>
 
       <SubmitMethodModal opened={submitOpen} methodName={definition.name} dirty={dirty} submitting={session.phase === 'submitting' || session.phase === 'saving'} onClose={() => setSubmitOpen(false)} onSubmit={(request) => void submit(request)} />
       <MethodConflictModal conflict={session.conflict} onReload={() => void reload()} onKeepMine={() => void session.keepMine()} />

@@ -165,6 +165,7 @@ export function TestTableEditor({ run, runOutdated, running, onRun, ...section }
                   <Table.Td>
                     <Select
                       size="xs"
+                      miw={90}
                       aria-label={`Expected verdict, row ${index + 1}`}
                       data={[
                         { value: 'any', label: 'Any' },

@@ -1,12 +1,15 @@
-import { Alert, Anchor, Badge, Breadcrumbs, Group, List, Skeleton, Stack, Table, Text, Title } from '@mantine/core';
+import { Alert, Anchor, Badge, Breadcrumbs, Button, Group, List, Skeleton, Stack, Table, Text, Title, Tooltip } from '@mantine/core';
+import { notifications } from '@mantine/notifications';
 import type { DesignTestRow, MethodCatalogDetail, MethodSummary, MethodUsage } from '@limitbook/contracts';
-import { IconShieldExclamation } from '@tabler/icons-react';
-import type { ReactNode } from 'react';
+import { IconArrowForwardUp, IconShieldExclamation } from '@tabler/icons-react';
+import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { describeInputs, formatNumber, type Field } from '@/components/calculator';
 import { PanelError } from '@/components/errors/panel-error';
+import { errorMessage } from '@/components/form/server-errors';
 import { paths } from '@/config/paths';
 import { useMethodDetail } from '../api/get-method-detail';
+import { useMoveBlocksForward } from '../api/move-blocks-forward';
 import { methodSource } from '../lib/catalog-filter';
 import { laggingUsages } from '../lib/usage';
 import { SourceBadge } from './methods-catalog';
@@ -141,7 +144,9 @@ export function ReleasedTests({ tests }: { tests: readonly DesignTestRow[] }) {
   );
 }
 
-function UsageTable({ usages, latestVersion }: { usages: readonly MethodUsage[]; latestVersion: number }) {
+type MoveForward = { pending: string | null; run: (usage: MethodUsage) => void };
+
+function UsageTable({ usages, latestVersion, moveForward }: { usages: readonly MethodUsage[]; latestVersion: number; moveForward?: MoveForward }) {
   if (usages.length === 0) return <Text size="sm" c="dimmed">No calculator block uses this method yet.</Text>;
   const lagging = new Set(laggingUsages(usages, latestVersion).map((usage) => `${usage.revisionId}:${usage.blockId}`));
   return (
@@ -153,6 +158,7 @@ function UsageTable({ usages, latestVersion }: { usages: readonly MethodUsage[];
             <Table.Th>Block</Table.Th>
             <Table.Th w={130}>Revision</Table.Th>
             <Table.Th w={170}>Pinned version</Table.Th>
+            {moveForward && <Table.Th w={150} />}
           </Table.Tr>
         </Table.Thead>
         <Table.Tbody>
@@ -190,6 +196,17 @@ function UsageTable({ usages, latestVersion }: { usages: readonly MethodUsage[];
                     </Group>
                   )}
                 </Table.Td>
+                {moveForward && (
+                  <Table.Td>
+                    {behind && (usage.state === 'released' || usage.state === 'draft') && (
+                      <Tooltip label={`Pins the block to v${latestVersion} in the page's draft; the page then goes through review`} multiline w={240}>
+                        <Button size="compact-xs" variant="default" leftSection={<IconArrowForwardUp size={12} />} loading={moveForward.pending === `${usage.pageId}:${usage.blockId}`} onClick={() => moveForward.run(usage)}>
+                          Move forward
+                        </Button>
+                      </Tooltip>
+                    )}
+                  </Table.Td>
+                )}
               </Table.Tr>
             );
           })}
@@ -209,10 +226,12 @@ type Props = {
   history?: ReactNode;
   /** The run panel. */
   run: ReactNode;
+  /** Authors and admins may move blocks pinned to older versions forward (through the page's review). */
+  canMoveForward?: boolean;
 };
 
 /** A method's own page: what it computes, from which sources, where it is used, and a panel to run it. */
-export function MethodOverview({ method, definition, actions, history, run }: Props) {
+export function MethodOverview({ method, definition, actions, history, run, canMoveForward = false }: Props) {
   const detail = useMethodDetail(method.id);
   const source = methodSource(method);
   return (
@@ -275,13 +294,34 @@ export function MethodOverview({ method, definition, actions, history, run }: Pr
         )}
       </Section>
 
-      <DetailSections detail={detail} source={source} />
+      <DetailSections detail={detail} source={source} methodId={method.id} canMoveForward={canMoveForward} />
       {history}
     </Stack>
   );
 }
 
-function DetailSections({ detail, source }: { detail: ReturnType<typeof useMethodDetail>; source: string }) {
+function DetailSections({ detail, source, methodId, canMoveForward }: { detail: ReturnType<typeof useMethodDetail>; source: string; methodId: string; canMoveForward: boolean }) {
+  const move = useMoveBlocksForward(methodId);
+  const [pending, setPending] = useState<string | null>(null);
+  const moveForward: MoveForward = {
+    pending,
+    run: (usage) => {
+      setPending(`${usage.pageId}:${usage.blockId}`);
+      move.mutate(
+        { pageId: usage.pageId, blockIds: [usage.blockId] },
+        {
+          onSuccess: (result) =>
+            notifications.show({
+              color: 'verdigris',
+              title: `${usage.documentNumber}: block moved forward`,
+              message: `${result.moved.map((entry) => `v${entry.from} → v${entry.to}`).join(', ')} in the page's draft (version ${result.version}). Submit the draft for review to release it.`,
+            }),
+          onError: (error) => notifications.show({ color: 'redline', title: `${usage.documentNumber} not changed`, message: errorMessage(error) }),
+          onSettled: () => setPending(null),
+        },
+      );
+    },
+  };
   if (detail.isPending) return <Skeleton h={160} />;
   if (detail.isError) return <PanelError title="Where this method is used could not be loaded" error={detail.error} onRetry={() => void detail.refetch()} />;
   const data: MethodCatalogDetail = detail.data;
@@ -293,7 +333,7 @@ function DetailSections({ detail, source }: { detail: ReturnType<typeof useMetho
         </Section>
       )}
       <Section title="Used on" id="usage-title">
-        <UsageTable usages={data.usages} latestVersion={data.latestVersion} />
+        <UsageTable usages={data.usages} latestVersion={data.latestVersion} moveForward={canMoveForward ? moveForward : undefined} />
       </Section>
     </>
   );

@@ -70,6 +70,7 @@ export function MethodRoute() {
       definition={slug ? released.data ? <DefinitionView definition={released.data.definition} tex={released.data.tex} /> : released.isError ? <PanelError error={released.error} title="The definition could not be loaded" /> : <Skeleton h={160} /> : undefined}
       history={slug ? <VersionHistory slug={slug} canRestore={user.role === 'admin'} /> : undefined}
       run={<MethodRunPanel method={method} />}
+      canMoveForward={canAccess(user.role, 'standards.edit')}
     />
   );
 }

@@ -1,0 +1,28 @@
+import { moveBlocksForwardResponseSchema, pageSchema, type MoveBlocksForwardResponse } from '@limitbook/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api, isApiError } from '@/lib/api-client';
+import { getMethodDetailQueryOptions } from './get-method-detail';
+
+/**
+ * Pins blocks of a page to their method's latest release, in the page's draft (the server starts
+ * one from the release when there is none). With a draft open the server wants its version, which
+ * is read and sent on the one retry; the change then goes through the page's review like any other.
+ */
+export async function moveBlocksForward(pageId: string, blockIds: string[]): Promise<MoveBlocksForwardResponse> {
+  const path = `/api/pages/${pageId}/lagging-blocks/move-forward`;
+  try {
+    return await api.post(path, { blockIds }, moveBlocksForwardResponseSchema);
+  } catch (error) {
+    if (!(isApiError(error) && error.status === 409 && 'baseVersion' in error.fields)) throw error;
+    const draft = await api.get(`/api/pages/${pageId}`, pageSchema, { query: { view: 'draft' } });
+    return api.post(path, { blockIds, baseVersion: draft.revision.version }, moveBlocksForwardResponseSchema);
+  }
+}
+
+export function useMoveBlocksForward(methodId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ pageId, blockIds }: { pageId: string; blockIds: string[] }) => moveBlocksForward(pageId, blockIds),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: getMethodDetailQueryOptions(methodId).queryKey }),
+  });
+}
