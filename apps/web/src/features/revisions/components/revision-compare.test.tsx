@@ -64,8 +64,13 @@ describe('RevisionCompareView', () => {
       ['Locked input positionTolerance', 'none', '', 'locked'],
     ]);
     const text = screen.getByRole('table', { name: 'Text changes' });
-    expect(within(text).getByText('Keep 1.5 mm of wall.').tagName).toBe('DEL');
-    expect(within(text).getByText('Keep 2 mm of wall.').tagName).toBe('INS');
+    // The changed line sits beside its replacement with only the differing word marked.
+    const [, changed] = within(text).getAllByRole('row').slice(1);
+    const [before, after] = within(changed!).getAllByRole('cell');
+    expect(before).toHaveTextContent('Keep 1.5 mm of wall.');
+    expect(after).toHaveTextContent('Keep 2 mm of wall.');
+    expect(within(before!).getByText('1.5').tagName).toBe('DEL');
+    expect(within(after!).getByText('2').tagName).toBe('INS');
     expect(screen.getByText('Wall around ports').tagName).toBe('DEL');
     expect(String(fetch.mock.calls.find(([url]) => String(url).includes('/compare'))?.[0])).toBe(`/api/pages/${page.id}/compare?from=${revA}&to=${revB}`);
   });

@@ -31,7 +31,27 @@ function Cell({ side }: { side: Side | null }) {
       <span className={classes.diffMark} aria-hidden>
         {mark}
       </span>
-      {side.kind === 'added' ? <ins>{side.text || ' '}</ins> : side.kind === 'removed' ? <del>{side.text || ' '}</del> : side.text || ' '}
+      {side.spans ? (
+        side.spans.map((span, index) =>
+          !span.changed ? (
+            <span key={index}>{span.text}</span>
+          ) : side.kind === 'added' ? (
+            <ins key={index} className={classes.word}>
+              {span.text}
+            </ins>
+          ) : (
+            <del key={index} className={classes.word}>
+              {span.text}
+            </del>
+          ),
+        )
+      ) : side.kind === 'added' ? (
+        <ins>{side.text || ' '}</ins>
+      ) : side.kind === 'removed' ? (
+        <del>{side.text || ' '}</del>
+      ) : (
+        side.text || ' '
+      )}
     </td>
   );
 }

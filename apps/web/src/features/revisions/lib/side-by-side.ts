@@ -1,6 +1,9 @@
 import type { TextChange } from '@limitbook/contracts';
+import { diffWordsWithSpace } from 'diff';
 
-export type Side = { text: string; kind: 'added' | 'removed' | 'unchanged' };
+/** A stretch of a changed line: `changed` marks the words that differ from the paired line. */
+export type Span = { text: string; changed: boolean };
+export type Side = { text: string; kind: 'added' | 'removed' | 'unchanged'; spans?: Span[] };
 export type DiffRow = { kind: 'line'; left: Side | null; right: Side | null } | { kind: 'gap'; count: number; lines: { left: Side; right: Side }[] };
 
 /**
@@ -22,7 +25,12 @@ export function sideBySide(changes: TextChange[], context = 2): DiffRow[] {
     const added: Side[] = [];
     while (index < changes.length && changes[index]!.kind === 'removed') removed.push({ ...changes[index++]! });
     while (index < changes.length && changes[index]!.kind === 'added') added.push({ ...changes[index++]! });
-    for (let line = 0; line < Math.max(removed.length, added.length); line += 1) rows.push({ left: removed[line] ?? null, right: added[line] ?? null });
+    for (let line = 0; line < Math.max(removed.length, added.length); line += 1) {
+      const left = removed[line] ?? null;
+      const right = added[line] ?? null;
+      if (left && right) markWords(left, right);
+      rows.push({ left, right });
+    }
   }
 
   const changed = rows.map((row) => row.left?.kind !== 'unchanged' || row.right?.kind !== 'unchanged');
@@ -43,4 +51,16 @@ export function sideBySide(changes: TextChange[], context = 2): DiffRow[] {
   });
   flush();
   return out;
+}
+
+/**
+ * Marks the words that differ between a removed line and the added line beside it, so a
+ * changed number inside a long paragraph stands out. Lines with little in common stay whole.
+ */
+function markWords(left: Side, right: Side) {
+  const parts = diffWordsWithSpace(left.text, right.text);
+  const common = parts.filter((part) => !part.added && !part.removed).reduce((sum, part) => sum + part.value.trim().length, 0);
+  if (common < Math.min(left.text.length, right.text.length) * 0.4) return;
+  left.spans = parts.filter((part) => !part.added).map((part) => ({ text: part.value, changed: !!part.removed }));
+  right.spans = parts.filter((part) => !part.removed).map((part) => ({ text: part.value, changed: !!part.added }));
 }
