@@ -34,6 +34,7 @@ async function fill(scope: Page | Locator, path: string, value: string) {
 describe('designing an in-house method and using it on a page', () => {
   const app = useAppUnderTest();
 
+  // A whole author → reviewer → author → reviewer → reader round, on a shared 2-core machine.
   it('an author designs, tests and submits a method; a reviewer releases it; the author embeds it in a page that is approved; a reader runs it with their own numbers', async () => {
     // The author designs the method.
     const author = open404s(await openPage(app.browser, app.server.baseUrl));
@@ -197,5 +198,5 @@ describe('designing an in-house method and using it on a page', () => {
       await reader.context.close();
     }
     expect(reader.problems.filter((problem) => !/status of 401/.test(problem))).toEqual([]);
-  });
+  }, 420_000);
 });
