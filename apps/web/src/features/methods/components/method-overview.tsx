@@ -55,8 +55,7 @@ function InputsAndOutputs({ method }: { method: MethodSummary }) {
               </Table.Td>
               <Table.Td>
                 <Text size="sm">
-                  {field.description ?? '—'}
-                  {field.kind === 'number' && field.length ? ' (length, mm or inch)' : ''}
+                  {field.kind === 'number' && field.length ? (field.description ? `${field.description} (length, mm or inch)` : 'A length, in mm or inch') : (field.description ?? '—')}
                 </Text>
               </Table.Td>
               <Table.Td>
