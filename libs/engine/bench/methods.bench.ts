@@ -1,7 +1,9 @@
 // In-process evaluations per second of every built-in method, and the Monte Carlo core
 // against a hand-written Float64Array loop doing the same arithmetic.
 // Run: npm run bench (or `npx tsx libs/engine/bench/methods.bench.ts`).
-import { builtInMethods, evaluateMethod, findMethod } from '../src/index.js';
+import { readFileSync } from 'node:fs';
+import { designDefinitionSchema } from '@limitbook/contracts';
+import { builtInMethods, checkMethodDesign, evaluateMethod, evaluateMethodDesign, findMethod, runDesignTests } from '../src/index.js';
 import { createRandomStream } from '../src/stack/index.js';
 import { methodSamples } from './method-samples.js';
 
@@ -78,3 +80,20 @@ console.table([
   { run: 'hand-written Float64Array loop', 'wall time ms': baselineMs.toFixed(0), 'std dev': Number(baselineStdDev.toFixed(6)) },
   { run: 'ratio method / loop', 'wall time ms': (engineMs / baselineMs).toFixed(2), 'std dev': '' },
 ]);
+
+// In-house methods: the demo designs as the designer's live preview and the catalog run them.
+const designRows: { design: string; task: string; 'runs/s': string; 'ms/run': string }[] = [];
+for (const file of ['o-ring-squeeze', 'press-fit-pressure']) {
+  const { definition } = JSON.parse(readFileSync(new URL(`../../../content/demo/methods/${file}.json`, import.meta.url), 'utf8')) as { definition: unknown };
+  const design = designDefinitionSchema.parse(definition);
+  for (const [task, run] of [
+    ['evaluate (defaults)', () => evaluateMethodDesign(design, {})],
+    ['check (save/preview)', () => checkMethodDesign(design)],
+    [`test table (${design.tests.length} rows)`, () => runDesignTests(design)],
+  ] as const) {
+    const rate = evaluationsPerSecond(run, 0.5);
+    designRows.push({ design: file, task, 'runs/s': Math.round(rate).toLocaleString('en-US'), 'ms/run': (1000 / rate).toFixed(2) });
+  }
+}
+console.log('\nIn-house method designs (one core, in process; the API adds a worker hop)');
+console.table(designRows);
