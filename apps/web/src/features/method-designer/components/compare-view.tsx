@@ -21,7 +21,7 @@ function versionName(ref: MethodCompare['from']): string {
 
 function WordDiff({ parts }: { parts: NonNullable<DefinitionChange['text']> }) {
   return (
-    <Text size="sm" className={classes.mono} component="div" data-testid="word-diff">
+    <Text size="sm" className={classes.mono} component="div" mt={6} data-testid="word-diff" aria-label="Word by word">
       {parts.map((part, index) =>
         part.kind === 'added' ? (
           <ins key={index} className={classes.ins}>
@@ -69,7 +69,7 @@ export function CompareView({ compare }: { compare: MethodCompare }) {
                       {change.change}
                     </Badge>
                     <Text className={classes.mono} fw={600}>
-                      {change.key}
+                      {change.key.startsWith('#') ? `${sectionLabels[section].replace(/s$/, '')} ${change.key}` : change.key}
                     </Text>
                   </Group>
                   {change.rows.length > 0 && (

@@ -148,6 +148,8 @@ type MoveForward = { pending: string | null; run: (usage: MethodUsage) => void }
 function UsageTable({ usages, latestVersion, moveForward }: { usages: readonly MethodUsage[]; latestVersion: number; moveForward?: MoveForward }) {
   if (usages.length === 0) return <Text size="sm" c="dimmed">No calculator block uses this method yet.</Text>;
   const lagging = new Set(laggingUsages(usages, latestVersion).map((usage) => `${usage.revisionId}:${usage.blockId}`));
+  // A block already moved forward in the page's open revision needs no second move from the released one.
+  const movedInDraft = new Set(usages.filter((usage) => (usage.state === 'draft' || usage.state === 'in_review') && (usage.methodVersion === null || usage.methodVersion >= latestVersion)).map((usage) => `${usage.pageId}:${usage.blockId}`));
   return (
     <Table.ScrollContainer minWidth={560}>
       <Table verticalSpacing={6} aria-label="Pages using this method">
@@ -197,7 +199,11 @@ function UsageTable({ usages, latestVersion, moveForward }: { usages: readonly M
                 </Table.Td>
                 {moveForward && (
                   <Table.Td>
-                    {behind && (usage.state === 'released' || usage.state === 'draft') && (
+                    {behind && usage.state === 'released' && movedInDraft.has(`${usage.pageId}:${usage.blockId}`) ? (
+                      <Text size="xs" c="dimmed">
+                        Moved in the draft
+                      </Text>
+                    ) : behind && (usage.state === 'released' || usage.state === 'draft') && (
                       <Tooltip label={`Pins the block to v${latestVersion} in the page's draft; the page then goes through review`} multiline w={240}>
                         <Button size="compact-xs" variant="default" leftSection={<IconArrowForwardUp size={12} />} loading={moveForward.pending === `${usage.pageId}:${usage.blockId}`} onClick={() => moveForward.run(usage)}>
                           Move forward
