@@ -1,4 +1,4 @@
-import { safetyCaution, type DerivationStep, type DesignDefinition, type Verdict } from '@limitbook/contracts';
+import { type DerivationStep, type DesignDefinition, type Verdict } from '@limitbook/contracts';
 import { EngineError, type EngineErrorCode } from '../core/engine-error.js';
 import { quantityLatex, type FormulaQuantity } from '../formula/describe-quantity.js';
 import { evaluateFormulaSet, type FormulaSetResult } from '../formula/evaluate-formula-set.js';
@@ -85,7 +85,8 @@ export function evaluateMethodDesign(definition: DesignDefinition, values: Desig
           summary: `${formulas.checks.filter((check) => check.pass).length} of ${formulas.checks.length} checks hold`,
           checks: formulas.checks.map((check) => ({ label: check.message ?? check.expression, pass: check.pass, detail: check.detail })),
         };
-  const warnings = [...resolved.warnings, ...formulas.warnings, ...(definition.safetyCritical ? [safetyCaution] : [])];
+  // The safety caution goes with the method's cautions (describeMethodDesign), shown beside every result like the built-ins'.
+  const warnings = [...resolved.warnings, ...formulas.warnings];
   return { outputs, ...(verdict ? { verdict } : {}), warnings, steps, inputs: resolved.inputValues };
 }
 
