@@ -1,7 +1,7 @@
 import { Alert, Anchor, Badge, Button, Group, Paper, Skeleton, Stack, Table, Text, Title } from '@mantine/core';
 import { notifications } from '@mantine/notifications';
 import type { CalculationRecord } from '@limitbook/contracts';
-import { IconAlertTriangle, IconFileTypeCsv, IconFileTypePdf } from '@tabler/icons-react';
+import { IconAlertTriangle, IconFileTypeCsv, IconFileTypePdf, IconRuler2 } from '@tabler/icons-react';
 import { useMemo, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { DerivationSteps, ResultPanel, acceptanceInWords, describeInputs, useMethods } from '@/components/calculator';
@@ -13,6 +13,7 @@ import { formatDateTime } from '@/lib/format';
 import { useDownloadRecordPdf, useExportRecords } from '../api/download-records';
 import { useRecord } from '../api/get-record';
 import { useRecordImpact } from '../api/get-record-impact';
+import { useRecordRevision } from '../api/get-record-revision';
 import { inputRows } from '../lib/input-rows';
 import { VerdictLabel } from './verdict-label';
 import classes from './records.module.css';
@@ -44,6 +45,19 @@ function ImpactNote({ record }: { record: CalculationRecord }) {
   );
 }
 
+type DocNode = { type?: string; attrs?: Record<string, unknown>; content?: DocNode[] };
+
+/** The caption the block had in the revision the record was made under. */
+function captionOf(node: DocNode | undefined, blockId: string): string | null {
+  if (!node) return null;
+  if (node.type === 'calculatorBlock' && node.attrs?.blockId === blockId) return typeof node.attrs.caption === 'string' && node.attrs.caption ? node.attrs.caption : null;
+  for (const child of node.content ?? []) {
+    const found = captionOf(child, blockId);
+    if (found) return found;
+  }
+  return null;
+}
+
 function Fact({ label, children }: { label: string; children: ReactNode }) {
   return (
     <div>
@@ -60,6 +74,7 @@ export function RecordView({ recordId }: { recordId: string }) {
   const pdf = useDownloadRecordPdf();
   const csv = useExportRecords();
   const method = record.data ? methods.byId(record.data.method) : undefined;
+  const revision = useRecordRevision(record.data?.page.id, record.data?.revision.id);
   const rows = useMemo(() => (record.data ? inputRows(record.data.inputs, method ? describeInputs(method.inputSchema, method.id) : []) : []), [record.data, method]);
 
   if (record.isPending) return <Skeleton h={480} />;
@@ -79,6 +94,7 @@ export function RecordView({ recordId }: { recordId: string }) {
 
   const data = record.data;
   const letter = data.revision.revisionLetter;
+  const caption = captionOf(revision.data?.document as DocNode | undefined, data.blockId);
   const reference = data.reference;
 
   return (
@@ -97,6 +113,9 @@ export function RecordView({ recordId }: { recordId: string }) {
             <Title order={1} className={classes.title}>
               {data.page.title}
             </Title>
+            <Text className={classes.calculator}>
+              <IconRuler2 size={16} aria-hidden /> {caption ?? `Calculator block ${data.blockId.slice(0, 8)}`}
+            </Text>
           </Stack>
           <Group gap="xs">
             <Button
@@ -132,9 +151,6 @@ export function RecordView({ recordId }: { recordId: string }) {
           <Fact label="Unit">{data.unit}</Fact>
           <Fact label="Recorded by">{data.createdBy?.name ?? 'a former user'}</Fact>
           <Fact label="Recorded at">{formatDateTime(data.createdAt)}</Fact>
-          <Fact label="Calculator block">
-            <span className={classes.mono}>{data.blockId.slice(0, 8)}</span>
-          </Fact>
         </dl>
       </header>
 
