@@ -32,6 +32,8 @@ import { MethodEvaluationException } from './methods.exception.js';
 const workerTimeLimitMs: ReadonlyMap<string, number> = new Map([
   ['stack-1d', 60_000],
   ['formula', 5_000],
+  // A few ms for a flange pattern, but up to ~0.7 s for 500 features that all bound the group shift.
+  ['position-check', 10_000],
 ]);
 
 /** In-house methods and the designer's previews, checks and test runs: the formula sandbox's limit. */
