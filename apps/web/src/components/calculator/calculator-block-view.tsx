@@ -1,5 +1,5 @@
 import { Alert, Badge, Button, Collapse, Group, Loader, Paper, Text } from '@mantine/core';
-import type { LengthUnit, MethodSummary } from '@limitbook/contracts';
+import { isHouseMethodId, type LengthUnit, type MethodSummary } from '@limitbook/contracts';
 import type { CalculatorBlockAttrs } from '@limitbook/editor-schema';
 import { IconAlertTriangle, IconChevronDown, IconCircleCheck, IconRestore, IconRuler2 } from '@tabler/icons-react';
 import { useMemo, useState, type ReactNode } from 'react';
@@ -20,7 +20,9 @@ export type CalculatorBlockConfig = Pick<CalculatorBlockAttrs, 'blockId' | 'meth
 
 /** The request a block makes with its own defaults: a page batches these on load. */
 export function blockRequest(block: CalculatorBlockConfig, method: MethodSummary | undefined, inputs = block.defaults as Record<string, unknown>, unit: LengthUnit = block.unit): EvaluationRequest {
-  return { method: block.method, inputs, unit, acceptance: ruleForRequest(block.acceptance, block.unit, method) };
+  // An in-house method runs at the version the block is pinned to; built-ins have one version on the server.
+  const methodVersion = isHouseMethodId(block.method) ? block.methodVersion : null;
+  return { method: block.method, inputs, unit, acceptance: ruleForRequest(block.acceptance, block.unit, method), methodVersion };
 }
 
 const stateLabels: Record<EvaluationState, string> = {
@@ -79,7 +81,13 @@ export function CalculatorBlockView({ block, method, catalogLoaded = true, evalu
 
   const unknownMethod = catalogLoaded && !method;
   const state: EvaluationState = unknownMethod ? 'error' : view.state;
-  const versionNote = method && block.methodVersion !== null && block.methodVersion !== method.version ? `written for v${block.methodVersion}; the server runs v${method.version}` : null;
+  const pinned = isHouseMethodId(block.method) && block.methodVersion !== null;
+  const versionNote =
+    method && block.methodVersion !== null && block.methodVersion !== method.version
+      ? pinned
+        ? `pinned to v${block.methodVersion}; v${method.version} is the latest release`
+        : `written for v${block.methodVersion}; the server runs v${method.version}`
+      : null;
 
   return (
     <Paper component="section" className={classes.card} aria-labelledby={titleId} data-calculator-block={block.blockId} data-method={block.method} data-state={state}>

@@ -16,6 +16,8 @@ export type EvaluationRequest = {
   inputs: Record<string, unknown>;
   unit: LengthUnit;
   acceptance?: AcceptanceRule | null;
+  /** In-house methods: the released version a block is pinned to; absent or null runs the latest release. */
+  methodVersion?: number | null;
 };
 
 /** The server's answer for one block: a result, or the error it gave (with its field messages). */
@@ -34,17 +36,22 @@ function stable(value: unknown): string {
 
 /** Equal requests get equal keys whatever the order of their properties. */
 export function evaluationKey(request: EvaluationRequest): string {
-  return stable({ method: request.method, unit: request.unit, inputs: request.inputs, acceptance: request.acceptance ?? null });
+  return stable({ method: request.method, unit: request.unit, inputs: request.inputs, acceptance: request.acceptance ?? null, methodVersion: request.methodVersion ?? undefined });
 }
 
 /** The request an `evaluationKey` was made from. */
 export function requestFromKey(key: string): EvaluationRequest {
-  const parsed = JSON.parse(key) as { method: string; unit: EvaluationRequest['unit']; inputs: Record<string, unknown>; acceptance: EvaluationRequest['acceptance'] };
-  return { method: parsed.method, unit: parsed.unit, inputs: parsed.inputs, acceptance: parsed.acceptance ?? null };
+  const parsed = JSON.parse(key) as { method: string; unit: EvaluationRequest['unit']; inputs: Record<string, unknown>; acceptance: EvaluationRequest['acceptance']; methodVersion?: number };
+  return { method: parsed.method, unit: parsed.unit, inputs: parsed.inputs, acceptance: parsed.acceptance ?? null, methodVersion: parsed.methodVersion ?? null };
 }
 
 function body(request: EvaluationRequest) {
-  return { inputs: request.inputs, unit: request.unit, ...(request.acceptance ? { acceptance: request.acceptance } : {}) };
+  return {
+    inputs: request.inputs,
+    unit: request.unit,
+    ...(request.acceptance ? { acceptance: request.acceptance } : {}),
+    ...(request.methodVersion != null ? { methodVersion: request.methodVersion } : {}),
+  };
 }
 
 /** Evaluates one block; the server's refusals (bad inputs, undefined fits…) come back as outcomes, not throws. */
