@@ -5,11 +5,11 @@ import { IconArrowForwardUp, IconShieldExclamation } from '@tabler/icons-react';
 import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { describeInputs, formatNumber, type Field } from '@/components/calculator';
+import { useMoveBlocksForward } from '@/components/calculator/api/move-blocks-forward';
 import { PanelError } from '@/components/errors/panel-error';
 import { errorMessage } from '@/components/form/server-errors';
 import { paths } from '@/config/paths';
-import { useMethodDetail } from '../api/get-method-detail';
-import { useMoveBlocksForward } from '../api/move-blocks-forward';
+import { getMethodDetailQueryOptions, useMethodDetail } from '../api/get-method-detail';
 import { methodSource } from '../lib/catalog-filter';
 import { laggingUsages } from '../lib/usage';
 import { SourceBadge } from './methods-catalog';
@@ -306,7 +306,7 @@ export function MethodOverview({ method, definition, actions, history, run, canM
 }
 
 function DetailSections({ detail, source, methodId, canMoveForward }: { detail: ReturnType<typeof useMethodDetail>; source: string; methodId: string; canMoveForward: boolean }) {
-  const move = useMoveBlocksForward(methodId);
+  const move = useMoveBlocksForward([getMethodDetailQueryOptions(methodId).queryKey]);
   const [pending, setPending] = useState<string | null>(null);
   const moveForward: MoveForward = {
     pending,

@@ -15,6 +15,7 @@ import { formatDate, formatDateTime } from '@/lib/format';
 import { useSessionUser } from '@/lib/session';
 import { usePage, type PageView } from '../api/get-page';
 import { usePageEvaluations } from '../api/use-page-evaluations';
+import { LaggingBlocksNotice } from './lagging-blocks-notice';
 import { PageActions } from './page-actions';
 import { ReviewPanel, ReviewWaitingBanner } from './review-panel';
 import { TableOfContents } from './table-of-contents';
@@ -188,6 +189,7 @@ export function StandardView({ documentNumber, view = 'released', headerActions,
           )}
         </header>
 
+        <LaggingBlocksNotice page={page.data} />
         {released && releaseNotes?.(page.data)}
 
         {methods.isError && <PanelError error={methods.error} onRetry={() => void methods.refetch()} title="The calculators could not load their methods" />}

@@ -1,7 +1,6 @@
 import { moveBlocksForwardResponseSchema, pageSchema, type MoveBlocksForwardResponse } from '@limitbook/contracts';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient, type QueryKey } from '@tanstack/react-query';
 import { api, isApiError } from '@/lib/api-client';
-import { getMethodDetailQueryOptions } from './get-method-detail';
 
 /**
  * Pins blocks of a page to their method's latest release, in the page's draft (the server starts
@@ -19,10 +18,14 @@ export async function moveBlocksForward(pageId: string, blockIds: string[]): Pro
   }
 }
 
-export function useMoveBlocksForward(methodId: string) {
+/**
+ * Shared by the method page (blocks across pages) and the standard page (blocks of one page);
+ * each names the queries that show pins, refreshed once the move is saved.
+ */
+export function useMoveBlocksForward(staleQueryKeys: QueryKey[]) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ pageId, blockIds }: { pageId: string; blockIds: string[] }) => moveBlocksForward(pageId, blockIds),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: getMethodDetailQueryOptions(methodId).queryKey }),
+    onSuccess: () => Promise.all(staleQueryKeys.map((queryKey) => queryClient.invalidateQueries({ queryKey }))),
   });
 }
