@@ -7,7 +7,7 @@ import { type EvaluationRequest } from './api/evaluate';
 import { DerivationSteps } from './derivation-steps';
 import { acceptanceInWords, ruleForRequest } from './lib/acceptance-words';
 import type { EvaluationState } from './lib/evaluation-state';
-import { describeInputs } from './lib/json-schema';
+import { describeInputs, hasLengthInput } from './lib/json-schema';
 import { convertInputs } from './lib/units';
 import { MethodInputsForm } from './method-inputs-form';
 import { ResultPanel } from './result-panel';
@@ -115,7 +115,8 @@ export function CalculatorBlockView({ block, method, catalogLoaded = true, evalu
         </div>
         <Group gap="sm" wrap="nowrap" className={classes.controls}>
           <StatusLabel state={state} />
-          <UnitToggle value={unit} onChange={switchUnit} disabled={!method} />
+          {/* In-house methods state their own units; the switch is only for methods that take lengths. */}
+          {hasLengthInput(fields) && <UnitToggle value={unit} onChange={switchUnit} />}
         </Group>
       </header>
 
@@ -196,7 +197,7 @@ export function CalculatorBlockView({ block, method, catalogLoaded = true, evalu
                 aria-expanded={showSteps}
                 rightSection={<IconChevronDown size={14} className={showSteps ? classes.chevronOpen : undefined} />}
               >
-                {showSteps ? 'Hide derivation' : `Show derivation (${view.result.steps.length} steps)`}
+                {showSteps ? 'Hide derivation' : `Show derivation (${view.result.steps.length} ${view.result.steps.length === 1 ? 'step' : 'steps'})`}
               </Button>
               <Collapse expanded={showSteps}>
                 {showSteps && (

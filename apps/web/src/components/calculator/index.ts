@@ -9,6 +9,6 @@ export { useMethods, getMethodsQueryOptions } from './api/get-methods';
 export { evaluateBatch, evaluateOne, evaluationKey, evaluationQueryOptions, seedEvaluations, type EvaluationOutcome, type EvaluationRequest } from './api/evaluate';
 export { deriveEvaluationView, type EvaluationState, type EvaluationView } from './lib/evaluation-state';
 export { acceptanceInWords, outputPathLabel, ruleForRequest } from './lib/acceptance-words';
-export { describeInputs, getAtPath, setAtPath, type Field, type JsonSchema } from './lib/json-schema';
+export { describeInputs, getAtPath, hasLengthInput, setAtPath, type Field, type JsonSchema } from './lib/json-schema';
 export { convertInputs, convertLength } from './lib/units';
 export { formatNumber, parseNumberText } from './lib/format-number';

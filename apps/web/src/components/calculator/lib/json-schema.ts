@@ -11,6 +11,8 @@ export type JsonSchema = {
   required?: string[];
   items?: JsonSchema;
   additionalProperties?: boolean | JsonSchema;
+  /** A display label the method states itself (in-house methods carry their author's labels). */
+  title?: string;
   description?: string;
   default?: unknown;
   minimum?: number;
@@ -46,6 +48,13 @@ export type CheckListField = FieldBase & { kind: 'check-list' };
 export type JsonField = FieldBase & { kind: 'json' };
 
 export type Field = NumberField | EnumField | TextField | ObjectField | TableField | TextListField | ValueMapField | CheckListField | JsonField;
+
+/** Whether any number among the fields (nested ones too) is a length, so the mm/inch switch applies. */
+export function hasLengthInput(fields: readonly Field[]): boolean {
+  return fields.some(
+    (field) => (field.kind === 'number' && field.length) || (field.kind === 'object' && hasLengthInput(field.fields)) || (field.kind === 'table' && hasLengthInput(field.columns)),
+  );
+}
 
 function typesOf(schema: JsonSchema): string[] {
   if (Array.isArray(schema.type)) return schema.type;
@@ -96,7 +105,7 @@ function describeField(name: string, path: string, raw: JsonSchema, required: bo
   const base: FieldBase = {
     path,
     name,
-    label: fieldLabel(name, path, parentName, method),
+    label: schema.title || raw.title || fieldLabel(name, path, parentName, method),
     description: schema.description ?? raw.description,
     required,
     nullable,

@@ -2,13 +2,9 @@ import { Alert, Button, Collapse, Group, Loader, Paper, Text } from '@mantine/co
 import type { LengthUnit, MethodSummary } from '@limitbook/contracts';
 import { IconAlertTriangle, IconChevronDown, IconPlayerPlay, IconRestore } from '@tabler/icons-react';
 import { useMemo, useState } from 'react';
-import { convertInputs, DerivationSteps, describeInputs, MethodInputsForm, ResultPanel, UnitToggle, useBlockEvaluation, type Field } from '@/components/calculator';
+import { convertInputs, DerivationSteps, describeInputs, MethodInputsForm, ResultPanel, UnitToggle, useBlockEvaluation, hasLengthInput } from '@/components/calculator';
 import { defaultsComplete, initialInputs } from '../lib/initial-inputs';
 import classes from './methods.module.css';
-
-function hasLength(fields: readonly Field[]): boolean {
-  return fields.some((field) => (field.kind === 'number' && field.length) || (field.kind === 'object' && hasLength(field.fields)) || (field.kind === 'table' && hasLength(field.columns)));
-}
 
 /** Runs the released method on the server with the reader's own numbers. */
 export function MethodRunPanel({ method }: { method: MethodSummary }) {
@@ -20,7 +16,7 @@ export function MethodRunPanel({ method }: { method: MethodSummary }) {
   const [showSteps, setShowSteps] = useState(false);
   const ready = touched || defaultsComplete(fields, defaults);
   const view = useBlockEvaluation({ method: method.id, inputs, unit }, { enabled: ready });
-  const lengths = hasLength(fields);
+  const lengths = hasLengthInput(fields);
 
   const change = (next: Record<string, unknown>) => {
     setTouched(true);
