@@ -41,8 +41,10 @@ export function LaggingBlocksNotice({ page }: { page: Page }) {
     move.mutate(
       { pageId: page.id, blockIds: blocks.map((block) => block.blockId) },
       {
-        onSuccess: (result) =>
+        onSuccess: (result) => {
+          const notificationId = `blocks-moved-${result.revisionId}-${result.version}`;
           notifications.show({
+            id: notificationId,
             color: 'verdigris',
             title: result.moved.length === 1 ? 'Block moved forward in the draft' : `${result.moved.length} blocks moved forward in the draft`,
             message: (
@@ -53,6 +55,7 @@ export function LaggingBlocksNotice({ page }: { page: Page }) {
                   href={editorHref}
                   onClick={(event) => {
                     event.preventDefault();
+                    notifications.hide(notificationId);
                     navigate(editorHref);
                   }}
                 >
@@ -60,7 +63,8 @@ export function LaggingBlocksNotice({ page }: { page: Page }) {
                 </Anchor>
               </Text>
             ),
-          }),
+          });
+        },
         onSettled: () => setPending(null),
       },
     );
