@@ -97,6 +97,18 @@ function InputsAndOutputs({ method }: { method: MethodSummary }) {
 }
 
 /** The released version's test table, read-only. */
+/** Name = value pairs that wrap between pairs, never inside one. */
+function Assignments({ items, empty }: { items: string[]; empty: string }) {
+  if (items.length === 0) return <Text size="sm">{empty}</Text>;
+  return (
+    <Text size="sm" component="div" className={classes.assignments}>
+      {items.map((item) => (
+        <span key={item}>{item}</span>
+      ))}
+    </Text>
+  );
+}
+
 export function ReleasedTests({ tests }: { tests: readonly DesignTestRow[] }) {
   if (tests.length === 0) return <Text size="sm" c="dimmed">This version has no test rows.</Text>;
   return (
@@ -105,7 +117,7 @@ export function ReleasedTests({ tests }: { tests: readonly DesignTestRow[] }) {
         <Table.Thead>
           <Table.Tr>
             <Table.Th w={40}>#</Table.Th>
-            <Table.Th>Case</Table.Th>
+            <Table.Th w="26%">Case</Table.Th>
             <Table.Th>Inputs</Table.Th>
             <Table.Th>Expected</Table.Th>
             <Table.Th w={90}>Verdict</Table.Th>
@@ -119,18 +131,13 @@ export function ReleasedTests({ tests }: { tests: readonly DesignTestRow[] }) {
                 <Text size="sm">{row.label || '—'}</Text>
               </Table.Td>
               <Table.Td>
-                <Text size="sm" className={classes.numeric}>
-                  {Object.entries(row.inputs)
-                    .map(([name, value]) => `${name} = ${formatNumber(value)}`)
-                    .join(', ') || 'defaults'}
-                </Text>
+                <Assignments items={Object.entries(row.inputs).map(([name, value]) => `${name} = ${formatNumber(value)}`)} empty="defaults" />
               </Table.Td>
               <Table.Td>
-                <Text size="sm" className={classes.numeric}>
-                  {Object.entries(row.expected)
-                    .map(([name, expected]) => `${name} = ${formatNumber(expected.value)}${expected.tolerance ? ` ± ${formatNumber(expected.tolerance)}` : ''}`)
-                    .join(', ') || '—'}
-                </Text>
+                <Assignments
+                  items={Object.entries(row.expected).map(([name, expected]) => `${name} = ${formatNumber(expected.value)}${expected.tolerance ? ` ± ${formatNumber(expected.tolerance)}` : ''}`)}
+                  empty="—"
+                />
               </Table.Td>
               <Table.Td>
                 <Text size="sm">{row.expectedVerdict ?? '—'}</Text>
