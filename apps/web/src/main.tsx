@@ -5,8 +5,7 @@ import '@fontsource/merriweather/400.css';
 import '@fontsource/merriweather/700.css';
 import '@fontsource/source-code-pro/400.css';
 // GD&T symbols (⌖ ⌀ Ⓜ Ⓛ ⏥ ⟂ …): downloaded only when a page shows one, thanks to unicode-range.
-import '@fontsource/noto-sans-symbols-2/symbols-400.css';
-import '@fontsource/noto-sans-symbols-2/math-400.css';
+import './app/symbol-fonts.css';
 import '@fontsource/source-code-pro/500.css';
 import './app/mantine-styles';
 import './app/global.css';

@@ -31,10 +31,10 @@ export const theme = createTheme({
   },
   black: '#1d1c18',
   white: surfaces.sheet,
-  fontFamily: '"Source Sans 3", "Segoe UI", "Noto Sans Symbols 2", system-ui, sans-serif',
-  fontFamilyMonospace: '"Source Code Pro", "Noto Sans Symbols 2", ui-monospace, "SFMono-Regular", Menlo, monospace',
+  fontFamily: '"Source Sans 3", "Segoe UI", "Limitbook Symbols", system-ui, sans-serif',
+  fontFamilyMonospace: '"Source Code Pro", "Limitbook Symbols", ui-monospace, "SFMono-Regular", Menlo, monospace',
   headings: {
-    fontFamily: 'Merriweather, Georgia, "Noto Sans Symbols 2", "Times New Roman", serif',
+    fontFamily: 'Merriweather, Georgia, "Limitbook Symbols", "Times New Roman", serif',
     fontWeight: '700',
     sizes: {
       h1: { fontSize: '1.75rem', lineHeight: '1.3' },
@@ -55,7 +55,7 @@ export const theme = createTheme({
     Badge: { defaultProps: { radius: 'xs', variant: 'light' } },
     Modal: {
       defaultProps: { radius: 'sm', overlayProps: { backgroundOpacity: 0.45, blur: 1 } },
-      styles: { title: { fontFamily: 'Merriweather, Georgia, "Noto Sans Symbols 2", serif', fontWeight: 700, fontSize: '1.125rem' } },
+      styles: { title: { fontFamily: 'Merriweather, Georgia, "Limitbook Symbols", serif', fontWeight: 700, fontSize: '1.125rem' } },
     },
     TextInput: { defaultProps: { radius: 'sm' } },
     PasswordInput: { defaultProps: { radius: 'sm' } },
