@@ -27,6 +27,11 @@ window.ResizeObserver = ResizeObserverStub as unknown as typeof ResizeObserver;
 Object.defineProperty(window, 'scrollTo', { writable: true, value: () => {} });
 Element.prototype.scrollIntoView = () => {};
 
+// Textarea autosize re-measures when web fonts load.
+if (!('fonts' in document)) {
+  Object.defineProperty(document, 'fonts', { value: { addEventListener: () => {}, removeEventListener: () => {}, ready: Promise.resolve() } });
+}
+
 const { getComputedStyle } = window;
 window.getComputedStyle = (element: Element) => getComputedStyle(element);
 

@@ -1,5 +1,4 @@
-import { pageSchema, reviewerListSchema, type SubmitForReviewRequest } from '@limitbook/contracts';
-import { useQuery } from '@tanstack/react-query';
+import { pageSchema, type SubmitForReviewRequest } from '@limitbook/contracts';
 import { api } from '@/lib/api-client';
 
 export function submitForReview(pageId: string, body: SubmitForReviewRequest) {
@@ -8,14 +7,4 @@ export function submitForReview(pageId: string, body: SubmitForReviewRequest) {
 
 export function withdrawFromReview(pageId: string) {
   return api.post(`/api/pages/${pageId}/draft/withdraw`, undefined, pageSchema);
-}
-
-/** Everyone an author may ask to review (active reviewers and admins). */
-export function useReviewers(enabled: boolean) {
-  return useQuery({
-    queryKey: ['reviewers'],
-    queryFn: () => api.get('/api/reviewers', reviewerListSchema),
-    enabled,
-    staleTime: 60_000,
-  });
 }

@@ -15,7 +15,7 @@ import { useSaveShortcut } from '../hooks/use-save-shortcut';
 import { ConflictModal } from './conflict-modal';
 import { DocumentProblemsAlert } from './document-problems-alert';
 import { EditorToolbar } from './editor-toolbar';
-import { SubmitReviewModal } from './submit-review-modal';
+import { SubmitForReviewModal } from '@/components/review/submit-for-review-modal';
 import classes from './page-editor.module.css';
 
 type Props = {
@@ -166,9 +166,11 @@ export function PageEditor({ page, readerHref }: Props) {
         onKeepMine={() => void session.keepMine()}
       />
 
-      <SubmitReviewModal
+      <SubmitForReviewModal
         opened={asking}
-        documentNumber={page.documentNumber}
+        title={`Submit ${page.documentNumber} for review`}
+        intro="The reviewers you pick get a mail. While the revision is in review nobody can edit it; withdraw it to make changes."
+        noteHint="Optional: what changed, what to look at"
         dirty={dirty}
         submitting={state.phase === 'submitting' || state.phase === 'saving'}
         onClose={() => setAsking(false)}

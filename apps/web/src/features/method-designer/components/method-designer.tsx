@@ -21,7 +21,7 @@ import { FormulasEditor } from './formulas-editor';
 import { InputsEditor } from './inputs-editor';
 import { LivePreview } from './live-preview';
 import { MethodConflictModal } from './method-conflict-modal';
-import { SubmitMethodModal } from './submit-method-modal';
+import { SubmitForReviewModal } from '@/components/review/submit-for-review-modal';
 import { TestTableEditor } from './test-table-editor';
 import classes from './designer.module.css';
 
@@ -220,7 +220,16 @@ export function MethodDesigner({ slug, revision: initial }: { slug: string; revi
         <TestTableEditor {...section} run={testRun?.run ?? null} runOutdated={!!testRun && testRun.key !== key} running={tests.isPending || session.phase === 'saving'} onRun={() => void runTests()} />
       </Block>
 
-      <SubmitMethodModal opened={submitOpen} methodName={definition.name} dirty={dirty} submitting={session.phase === 'submitting' || session.phase === 'saving'} onClose={() => setSubmitOpen(false)} onSubmit={(request) => void submit(request)} />
+      <SubmitForReviewModal
+        opened={submitOpen}
+        title={`Submit “${definition.name}” for review`}
+        intro="The reviewers get a mail. Once approved, the method is released with the next version number and authors can pick it for calculator blocks."
+        noteHint="Optional: what the method is for, what to check"
+        dirty={dirty}
+        submitting={session.phase === 'submitting' || session.phase === 'saving'}
+        onClose={() => setSubmitOpen(false)}
+        onSubmit={(request) => void submit(request)}
+      />
       <MethodConflictModal conflict={session.conflict} onReload={() => void reload()} onKeepMine={() => void session.keepMine()} />
     </Stack>
   );

@@ -1,26 +1,31 @@
 import { Alert, Button, Group, Modal, MultiSelect, Stack, Text, Textarea } from '@mantine/core';
-import { useState } from 'react';
+import type { SubmitForReviewRequest } from '@limitbook/contracts';
+import { useState, type ReactNode } from 'react';
 import { errorMessage } from '@/components/form/server-errors';
 import { useSessionUser } from '@/lib/session';
-import { useReviewers } from '../api/review';
+import { useReviewers } from './api/get-reviewers';
 
 type Props = {
   opened: boolean;
-  documentNumber: string;
+  title: string;
+  /** What happens on submission, in the words of the thing being reviewed. */
+  intro: ReactNode;
+  noteHint: string;
   dirty: boolean;
   submitting: boolean;
   onClose: () => void;
-  onSubmit: (request: { reviewerIds: string[]; note?: string }) => void;
+  onSubmit: (request: SubmitForReviewRequest) => void;
 };
 
-/** Asks who should review the draft, with an optional note for them. */
-export function SubmitReviewModal({ opened, documentNumber, dirty, submitting, onClose, onSubmit }: Props) {
+/** Asks who should review a page revision or a method version, with an optional note for them. */
+export function SubmitForReviewModal({ opened, title, intro, noteHint, dirty, submitting, onClose, onSubmit }: Props) {
   const me = useSessionUser();
   const reviewers = useReviewers(opened);
   const [reviewerIds, setReviewerIds] = useState<string[]>([]);
   const [note, setNote] = useState('');
   const [touched, setTouched] = useState(false);
 
+  // Nobody reviews their own work, so the author is not offered.
   const options = (reviewers.data?.items ?? [])
     .filter((reviewer) => reviewer.id !== me.id)
     .map((reviewer) => ({ value: reviewer.id, label: `${reviewer.name} (${reviewer.email})` }));
@@ -34,10 +39,10 @@ export function SubmitReviewModal({ opened, documentNumber, dirty, submitting, o
   };
 
   return (
-    <Modal opened={opened} onClose={onClose} title={`Submit ${documentNumber} for review`}>
+    <Modal opened={opened} onClose={onClose} title={title}>
       <Stack gap="md">
         <Text size="sm">
-          The reviewers you pick get a mail. While the revision is in review nobody can edit it; withdraw it to make changes.
+          {intro}
           {dirty && ' Your unsaved changes are saved first.'}
         </Text>
         {reviewers.isError && (
@@ -58,7 +63,7 @@ export function SubmitReviewModal({ opened, documentNumber, dirty, submitting, o
           comboboxProps={{ withinPortal: true }}
           required
         />
-        <Textarea label="Note for the reviewers" description="Optional: what changed, what to look at" value={note} onChange={(event) => setNote(event.currentTarget.value)} autosize minRows={2} maxLength={4000} />
+        <Textarea label="Note for the reviewers" description={noteHint} value={note} onChange={(event) => setNote(event.currentTarget.value)} autosize minRows={2} maxLength={4000} />
         <Group justify="flex-end">
           <Button variant="default" onClick={onClose}>
             Keep editing

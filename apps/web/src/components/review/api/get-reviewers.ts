@@ -6,7 +6,6 @@ export function getReviewers({ signal }: { signal?: AbortSignal } = {}): Promise
   return api.get('/api/reviewers', reviewerListSchema, { signal });
 }
 
-// Same key as the page editor's picker: one list of reviewers in the cache.
 export const getReviewersQueryOptions = () => queryOptions({ queryKey: ['reviewers'], queryFn: ({ signal }) => getReviewers({ signal }), staleTime: 60_000 });
 
 /** Everyone an author may ask to review (active reviewers and admins). */
