@@ -29,7 +29,7 @@ Element.prototype.scrollIntoView = () => {};
 
 // Textarea autosize re-measures when web fonts load.
 if (!('fonts' in document)) {
-  Object.defineProperty(document, 'fonts', { value: { addEventListener: () => {}, removeEventListener: () => {}, ready: Promise.resolve() } });
+  Object.defineProperty(document, 'fonts', { configurable: true, value: { addEventListener: () => {}, removeEventListener: () => {}, ready: Promise.resolve() } });
 }
 
 const { getComputedStyle } = window;

@@ -46,10 +46,6 @@ function revision(expression: string): MethodRevision {
 const result = { method: 'preview', version: 0, unit: 'mm', outputs: { squeeze: { value: 20.6799, unit: '', text: '20.68', label: 'Squeeze' } }, warnings: [], steps: [], verdict: { pass: true, summary: '1 of 1 checks hold', checks: [] } };
 
 describe('MethodDesigner', () => {
-  beforeEach(() => {
-    // jsdom has no FontFaceSet; Mantine's autosizing textarea listens to it.
-    Object.defineProperty(document, 'fonts', { configurable: true, value: { addEventListener: () => {}, removeEventListener: () => {} } });
-  });
   beforeEach(() => session.signIn({ accessToken: 't', expiresIn: 900, user: { id: 'u1', email: 'idris.okafor@brackwater.example', name: 'Idris Okafor', role: 'author' } }));
   afterEach(() => vi.unstubAllGlobals());
 
